@@ -1,0 +1,152 @@
+package org.linesweep.physics;
+
+import org.apache.commons.math3.complex.Complex;
+
+/**
+ * Internal (surface) impedance of conductors, valid from DC through the skin-effect regime without a
+ * seam. All results are per metre of line (round conductors) or per square (flat conductors), Ω.
+ */
+public final class InternalImpedance {
+
+    private static final Complex ONE_PLUS_J = new Complex(1.0, 1.0);
+
+    private InternalImpedance() {
+    }
+
+    /**
+     * Internal impedance of a solid round wire divided by its DC resistance, as a function of a/δ alone:
+     * Z/R_dc = (z/2)·I0(z)/I1(z) with z = (1 + j)·a/δ. Exact for an isolated round wire or one inside a
+     * concentric return (S. A. Schelkunoff, Bell Syst. Tech. J. 13, 1934, pp. 532-579; the Kelvin-function
+     * form of the same result). Tends to 1 + j(a/δ)²/4 at low frequency (internal inductance μ/8π) and to
+     * (1 + j)·a/(2δ) + 1/4 at high frequency.
+     *
+     * @param radiusOverSkinDepth a/δ, ≥ 0
+     * @return Z_int/R_dc
+     */
+    public static Complex roundWireRatio(double radiusOverSkinDepth) {
+        if (radiusOverSkinDepth == 0.0) {
+            return Complex.ONE;
+        }
+        Complex z = ONE_PLUS_J.multiply(radiusOverSkinDepth);
+        return z.multiply(0.5).multiply(SpecialFunctions.besselIRatio(z));
+    }
+
+    /**
+     * Internal impedance per metre of a solid round wire of the given radius, including Hammerstad's
+     * roughness factor.
+     *
+     * @return Z_int, Ω/m; zero for a perfect conductor
+     */
+    public static Complex roundWire(Conductor conductor, double radiusMetres, double frequencyHz) {
+        if (conductor.isPerfect()) {
+            return Complex.ZERO;
+        }
+        double dcResistance = 1.0 / (conductor.conductivitySiemensPerMetre() * Math.PI * radiusMetres * radiusMetres);
+        if (frequencyHz <= 0) {
+            return new Complex(dcResistance);
+        }
+        double ratio = radiusMetres / conductor.skinDepthMetres(frequencyHz);
+        return roundWireRatio(ratio).multiply(dcResistance * conductor.roughnessFactor(frequencyHz));
+    }
+
+    /**
+     * Internal impedance per metre of a tubular return conductor (current on the inside, no field outside):
+     * <pre>Z = (g/(2πbσ))·[I0(gb)K1(gc) + K0(gb)I1(gc)] / [I1(gc)K1(gb) − I1(gb)K1(gc)],  g = (1 + j)/δ</pre>
+     * with b the inner and c the outer radius (Schelkunoff 1934). Evaluated with exponentially scaled
+     * Bessel functions: multiplying through by e^(gb − gc) leaves only the bounded factor e^(−2g(c − b)).
+     * Tends to 1/(σπ(c² − b²)) at DC and to (1 + j)·Rs/(2πb) at high frequency.
+     *
+     * @return Z_int, Ω/m; zero for a perfect conductor
+     */
+    public static Complex tube(Conductor conductor, double innerRadiusMetres, double outerRadiusMetres,
+            double frequencyHz) {
+        if (conductor.isPerfect()) {
+            return Complex.ZERO;
+        }
+        double sigma = conductor.conductivitySiemensPerMetre();
+        double dcResistance = 1.0 / (sigma * Math.PI
+                * (outerRadiusMetres - innerRadiusMetres) * (outerRadiusMetres + innerRadiusMetres));
+        if (frequencyHz <= 0) {
+            return new Complex(dcResistance);
+        }
+        return tubeRatio(innerRadiusMetres / conductor.skinDepthMetres(frequencyHz),
+                outerRadiusMetres / innerRadiusMetres)
+                .multiply(dcResistance * conductor.roughnessFactor(frequencyHz));
+    }
+
+    /**
+     * The tube's internal impedance divided by its DC resistance; depends on b/δ and c/b only.
+     *
+     * @param innerRadiusOverSkinDepth b/δ, &gt; 0
+     * @param outerOverInnerRadius c/b, &gt; 1
+     */
+    public static Complex tubeRatio(double innerRadiusOverSkinDepth, double outerOverInnerRadius) {
+        Complex gb = ONE_PLUS_J.multiply(innerRadiusOverSkinDepth);
+        Complex gc = gb.multiply(outerOverInnerRadius);
+        Complex[] ib = SpecialFunctions.scaledI(gb);
+        Complex[] kb = SpecialFunctions.scaledK(gb);
+        Complex[] ic = SpecialFunctions.scaledI(gc);
+        Complex[] kc = SpecialFunctions.scaledK(gc);
+        Complex decay = gb.subtract(gc).multiply(2.0).exp();
+        Complex numerator = decay.multiply(ib[0]).multiply(kc[1]).add(kb[0].multiply(ic[1]));
+        Complex denominator = ic[1].multiply(kb[1]).subtract(decay.multiply(ib[1]).multiply(kc[1]));
+        // Z/R_dc = (g b/2)·(c²/b² − 1)·numerator/denominator, from Z = (g/(2πbσ))·N/D and R_dc = 1/(σπ(c²−b²)).
+        double areaFactor = (outerOverInnerRadius - 1.0) * (outerOverInnerRadius + 1.0);
+        return gb.multiply(0.5 * areaFactor).multiply(numerator).divide(denominator);
+    }
+
+    /**
+     * Surface impedance of a flat conductor of thickness t carrying current on one face:
+     * Z_s = (k/σ)·coth(k t), k = (1 + j)/δ, Ω per square. This is the exact one-dimensional result for a
+     * plane conductor (Ramo, Whinnery and Van Duzer, Fields and Waves in Communication Electronics, the
+     * plane-conductor internal impedance); it gives 1/(σt) at DC and (1 + j)·Rs once t ≫ δ.
+     * An infinite thickness gives the thick-conductor value (1 + j)·Rs.
+     *
+     * @return Z_s per square; zero for a perfect conductor
+     */
+    public static Complex flatSurface(Conductor conductor, double thicknessMetres, double frequencyHz) {
+        if (conductor.isPerfect()) {
+            return Complex.ZERO;
+        }
+        double sigma = conductor.conductivitySiemensPerMetre();
+        if (frequencyHz <= 0) {
+            return new Complex(1.0 / (sigma * thicknessMetres));
+        }
+        double delta = conductor.skinDepthMetres(frequencyHz);
+        double roughness = conductor.roughnessFactor(frequencyHz);
+        if (Double.isInfinite(thicknessMetres)) {
+            return ONE_PLUS_J.multiply(roughness / (sigma * delta));
+        }
+        Complex x = ONE_PLUS_J.multiply(thicknessMetres / delta);
+        // Z_s·σt = (k t)·coth(k t) = x·coth(x)
+        return xCothX(x).multiply(roughness / (sigma * thicknessMetres));
+    }
+
+    /** x·coth(x) for Re x ≥ 0, accurate both for small |x| (series) and large |x| (no overflow). */
+    static Complex xCothX(Complex x) {
+        if (x.abs() < 0.01) {
+            // x·coth x = 1 + x²/3 − x⁴/45 + 2x⁶/945 − …, next term of relative size |x|⁸
+            Complex square = x.multiply(x);
+            return Complex.ONE.add(square.multiply(1.0 / 3.0))
+                    .subtract(square.multiply(square).multiply(1.0 / 45.0))
+                    .add(square.multiply(square).multiply(square).multiply(2.0 / 945.0));
+        }
+        Complex decay = x.multiply(-2.0).exp();
+        return x.multiply(Complex.ONE.add(decay)).divide(Complex.ONE.subtract(decay));
+    }
+
+    /**
+     * Weight by which the proximity factor applies to a round wire: s = 1 − R_dc/R_ac, the part of the
+     * wire's resistance due to the skin effect. It is 0 at DC (uniform current, no crowding) and tends to
+     * 1 as the skin effect develops, so the factor X/sqrt(X² − 1), which is a high-frequency result,
+     * fades in at the same pace as the skin effect.
+     *
+     * @param wireRatio Z_int/R_dc of the isolated wire
+     * @param proximityFactor X/sqrt(X² − 1)
+     * @return the blended multiplier 1 + s·(P − 1)
+     */
+    public static double blendedProximity(Complex wireRatio, double proximityFactor) {
+        double skinWeight = 1.0 - 1.0 / wireRatio.getReal();
+        return 1.0 + Math.max(0.0, skinWeight) * (proximityFactor - 1.0);
+    }
+}

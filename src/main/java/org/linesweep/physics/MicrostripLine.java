@@ -1,0 +1,179 @@
+package org.linesweep.physics;
+
+import java.util.ArrayList;
+import java.util.List;
+import org.apache.commons.math3.complex.Complex;
+
+/**
+ * Microstrip: a strip of width w and thickness t on a substrate of height h over a ground plane.
+ *
+ * <p>Quasi-TEM mapping to per-unit-length parameters, with Z0 the quasi-static Hammerstad-Jensen value at
+ * ε′(f) and ε_eff(f) from Kirschning-Jansen (see {@link MicrostripFormulas}):
+ * <pre>L'_ext = Z0·sqrt(ε_eff(f))/c,   C' = sqrt(ε_eff(f))/(Z0·c),   G' = 2α_d/Z0</pre>
+ * so β follows the dispersive ε_eff. Dielectric loss uses the filling factor
+ * α_d = k0·εr·(ε_eff − 1)·tan δ/(2·sqrt(ε_eff)·(εr − 1)) (Pozar, Microwave Engineering) with the
+ * dispersive ε_eff(f) and the loss tangent including bulk conduction.
+ *
+ * <p>Conductor loss by Wheeler's incremental-inductance rule (Proc. IRE 30, 1942) on the air-filled
+ * Hammerstad-Jensen impedance with thickness: every surface recedes by dn, the strip's (w − 2dn, t − 2dn,
+ * h + dn) and the ground's (h + dn), and the surface impedance of each conductor replaces Rs:
+ * Z_int = K_rough·[Z_s(t)·∂Z0_air/∂n|strip + Z_s(t)·∂Z0_air/∂n|ground]/η0. The ground plane is taken
+ * to be the same foil as the strip (thickness t). At DC this gives the surface-impedance limit 1/(σt)
+ * spread by the same geometric weights, which overstates the strip's true DC resistance 1/(σwt) a little
+ * because the derivative includes the edges.
+ */
+public final class MicrostripLine extends LineModel {
+
+    /** Derivative step of the incremental-inductance rule, as a fraction of t (1e-4·t is adequate). */
+    static final double WHEELER_STEP_FRACTION = 1e-4;
+
+    private final double widthMetres;
+    private final double heightMetres;
+    private final double thicknessMetres;
+    private final double stripDerivativeOhmPerMetre;
+    private final double groundDerivativeOhmPerMetre;
+    private final double[] constantStatic;
+
+    public MicrostripLine(double widthMetres, double heightMetres, double thicknessMetres, Conductor conductor,
+            Dielectric dielectric) {
+        super(conductor, dielectric);
+        this.widthMetres = widthMetres;
+        this.heightMetres = heightMetres;
+        this.thicknessMetres = thicknessMetres;
+        double dn = WHEELER_STEP_FRACTION * thicknessMetres;
+        this.stripDerivativeOhmPerMetre =
+                (MicrostripFormulas.airImpedance(widthMetres - 2 * dn, heightMetres + dn, thicknessMetres - 2 * dn)
+                - MicrostripFormulas.airImpedance(widthMetres + 2 * dn, heightMetres - dn, thicknessMetres + 2 * dn))
+                / (2 * dn);
+        this.groundDerivativeOhmPerMetre =
+                (MicrostripFormulas.airImpedance(widthMetres, heightMetres + dn, thicknessMetres)
+                - MicrostripFormulas.airImpedance(widthMetres, heightMetres - dn, thicknessMetres)) / (2 * dn);
+        this.constantStatic = dielectric.model() == DielectricModelKind.CONSTANT
+                ? staticAt(dielectric.relativePermittivity()) : null;
+    }
+
+    private double[] staticAt(double relativePermittivity) {
+        return MicrostripFormulas.staticImpedanceAndPermittivity(widthMetres / heightMetres,
+                thicknessMetres / heightMetres, relativePermittivity);
+    }
+
+    @Override
+    public LineType type() {
+        return LineType.MICROSTRIP;
+    }
+
+    /** Quasi-static Z0 and ε_eff(0) at the dielectric's ε′(f). */
+    public double[] staticImpedanceAndPermittivity(double frequencyHz) {
+        return constantStatic != null ? constantStatic : staticAt(permittivity.real(frequencyHz));
+    }
+
+    /** Kirschning-Jansen ε_eff(f). */
+    public double effectivePermittivity(double frequencyHz) {
+        double[] statics = staticImpedanceAndPermittivity(frequencyHz);
+        return MicrostripFormulas.dispersiveEffectivePermittivity(statics[1], widthMetres / heightMetres,
+                permittivity.real(frequencyHz), frequencyHz * heightMetres);
+    }
+
+    /** Internal impedance of strip and ground per metre, Ω/m. */
+    public Complex conductorImpedance(double frequencyHz) {
+        Complex surface = InternalImpedance.flatSurface(conductor, thicknessMetres, frequencyHz);
+        return surface.multiply((stripDerivativeOhmPerMetre + groundDerivativeOhmPerMetre)
+                / PhysicalConstants.FREE_SPACE_IMPEDANCE_OHM);
+    }
+
+    @Override
+    public void evaluate(double frequencyHz, LineParameters out) {
+        double omega = 2 * Math.PI * frequencyHz;
+        double relativePermittivity = permittivity.real(frequencyHz);
+        double[] statics = staticImpedanceAndPermittivity(frequencyHz);
+        double z0 = statics[0];
+        double effective = MicrostripFormulas.dispersiveEffectivePermittivity(statics[1],
+                widthMetres / heightMetres, relativePermittivity, frequencyHz * heightMetres);
+        double rootEffective = Math.sqrt(effective);
+        double c = PhysicalConstants.SPEED_OF_LIGHT_METRES_PER_SECOND;
+        double fillingFactor = relativePermittivity - 1.0 > 1e-12
+                ? (effective - 1.0) / (relativePermittivity - 1.0) : 1.0;
+        double alphaDielectric = (omega / c) * relativePermittivity * fillingFactor
+                * permittivity.effectiveLossTangent(frequencyHz) / (2.0 * rootEffective);
+        Complex internal = conductorImpedance(frequencyHz);
+        out.set(internal.getReal(),
+                z0 * rootEffective / c + internal.getImaginary() / omega,
+                2.0 * alphaDielectric / z0,
+                rootEffective / (z0 * c),
+                effective);
+    }
+
+    @Override
+    public double characteristicHalfSizeMetres() {
+        return thicknessMetres / 2;
+    }
+
+    @Override
+    public double characteristicResistanceRatio(double frequencyHz) {
+        if (conductor.isPerfect()) {
+            return Double.NaN;
+        }
+        return InternalImpedance.flatSurface(conductor, thicknessMetres, frequencyHz).getReal()
+                * conductor.conductivitySiemensPerMetre() * thicknessMetres;
+    }
+
+    /**
+     * The lower of the TM0 surface-wave coupling frequency f_T = c·atan(εr)/(√2·π·h·sqrt(εr − 1))
+     * (Vendelin, 1970, from memory) and the transverse resonance f_CT = c/(sqrt(εr)·(2w + 0.8h))
+     * (as collected by Edwards, Foundations for Microstrip Circuit Design, from memory).
+     */
+    @Override
+    public double higherModeCutoffHz() {
+        double c = PhysicalConstants.SPEED_OF_LIGHT_METRES_PER_SECOND;
+        double estimate = c / (2 * widthMetres + 0.8 * heightMetres);
+        double f = estimate;
+        for (int i = 0; i < 4; i++) {
+            f = Math.min(surfaceWaveHz(permittivity.real(f)), transverseHz(permittivity.real(f)));
+        }
+        return f;
+    }
+
+    private double surfaceWaveHz(double relativePermittivity) {
+        if (relativePermittivity <= 1.0) {
+            return Double.POSITIVE_INFINITY;
+        }
+        return PhysicalConstants.SPEED_OF_LIGHT_METRES_PER_SECOND * Math.atan(relativePermittivity)
+                / (Math.sqrt(2.0) * Math.PI * heightMetres * Math.sqrt(relativePermittivity - 1.0));
+    }
+
+    private double transverseHz(double relativePermittivity) {
+        return PhysicalConstants.SPEED_OF_LIGHT_METRES_PER_SECOND
+                / (Math.sqrt(relativePermittivity) * (2 * widthMetres + 0.8 * heightMetres));
+    }
+
+    @Override
+    public List<String> validityWarnings() {
+        List<String> warnings = new ArrayList<>();
+        double u = widthMetres / heightMetres;
+        double er = dielectric.relativePermittivity();
+        if (u < 0.01 || u > 100) {
+            warnings.add(String.format("microstrip: w/h = %.4g is outside the Hammerstad-Jensen range 0.01..100", u));
+        } else if (u < 0.1) {
+            warnings.add(String.format("microstrip: w/h = %.4g is below 0.1, the Kirschning-Jansen dispersion range",
+                    u));
+        }
+        if (er > 128) {
+            warnings.add(String.format("microstrip: εr = %.4g is above the Hammerstad-Jensen range (≤ 128)", er));
+        } else if (er > 20) {
+            warnings.add(String.format("microstrip: εr = %.4g is above the Kirschning-Jansen range (≤ 20)", er));
+        }
+        if (thicknessMetres > heightMetres) {
+            warnings.add("microstrip: the strip is thicker than its substrate; the thickness correction is"
+                    + " not meant for that");
+        }
+        if (dielectric.relativePermeability() != 1.0) {
+            warnings.add("microstrip: the substrate's permeability is not modelled (taken as 1)");
+        }
+        return warnings;
+    }
+
+    /** Highest frequency of the Kirschning-Jansen validity range, h/λ0 = 0.13, Hz. */
+    public double dispersionValidityLimitHz() {
+        return 0.13 * PhysicalConstants.SPEED_OF_LIGHT_METRES_PER_SECOND / heightMetres;
+    }
+}
