@@ -76,8 +76,11 @@ public final class LimitFinder {
                 * r * r));
     }
 
-    /** Where an open line's spacing reaches a tenth of the wavelength in its medium: s = λ0/(10·sqrt(εr μr)). */
-    private static double radiationSpacing(LineModel model) {
+    /**
+     * Where an open line's spacing reaches a tenth of the wavelength in its medium, s = λ0/(10·sqrt(εr μr))
+     * (common practice), Hz; NaN for closed lines or outside the band.
+     */
+    public static double radiationSpacing(LineModel model) {
         double spacing = model.radiatingSpacingMetres();
         if (Double.isNaN(spacing)) {
             return Double.NaN;

@@ -1,0 +1,2 @@
+/** The JavaFX explorer window: composition root, observable model and views. */
+package org.linesweep.app;
