@@ -1,0 +1,151 @@
+package org.linesweep.cli;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertFalse;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import com.fasterxml.jackson.databind.JsonNode;
+import com.fasterxml.jackson.databind.ObjectMapper;
+import java.io.ByteArrayOutputStream;
+import java.io.IOException;
+import java.io.PrintStream;
+import java.nio.charset.StandardCharsets;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
+import org.junit.jupiter.params.ParameterizedTest;
+import org.junit.jupiter.params.provider.ValueSource;
+import org.linesweep.io.DesignFiles;
+import org.linesweep.io.Presets;
+import org.linesweep.physics.FrequencyLimits;
+import org.linesweep.physics.LimitFinder;
+
+class CommandLineTest {
+
+    private static final String HEADER = "frequency_hz,r_ohm_per_m,l_h_per_m,g_s_per_m,c_f_per_m,z0_re_ohm,z0_im_ohm,"
+            + "alpha_db_per_m,beta_rad_per_m,phase_velocity_m_per_s,group_velocity_m_per_s,wavelength_m,"
+            + "electrical_length,eps_eff,skin_depth_m";
+
+    private record Run(int status, String out, String err) {
+    }
+
+    private static Run run(String... args) {
+        ByteArrayOutputStream out = new ByteArrayOutputStream();
+        ByteArrayOutputStream err = new ByteArrayOutputStream();
+        int status = LineSweepCommand.execute(args, new PrintStream(out, true, StandardCharsets.UTF_8),
+                new PrintStream(err, true, StandardCharsets.UTF_8));
+        return new Run(status, out.toString(StandardCharsets.UTF_8), err.toString(StandardCharsets.UTF_8));
+    }
+
+    private static String preset(String name) {
+        return "presets/" + name + ".json";
+    }
+
+    @Test
+    void sweepWritesTheExactHeaderAndOneRowPerPoint() {
+        Run r = run("sweep", preset("bench-patch-lead"), "--from", "1MHz", "--to", "1GHz", "--points", "7");
+        assertEquals(0, r.status(), r.err());
+        String[] lines = r.out().split("\n");
+        assertEquals(HEADER, lines[0]);
+        assertEquals(8, lines.length);
+        assertTrue(lines[1].startsWith("1000000.0,"));
+        assertTrue(lines[7].startsWith("1.0E9,"));
+        assertFalse(r.out().contains(" "), "no padding or thousands separators");
+    }
+
+    @Test
+    void singleAtPointHasAGroupVelocityAndPerfectConductorHasNoSkinDepth() {
+        Run r = run("sweep", preset("air-line-reference"), "--at", "2.4GHz");
+        assertEquals(0, r.status(), r.err());
+        String[] cells = r.out().split("\n")[1].split(",", -1);
+        assertEquals(15, cells.length);
+        assertEquals(2.998e8, Double.parseDouble(cells[10]), 1e5);
+        assertEquals("", cells[14], "skin depth of a perfect conductor is an empty cell");
+    }
+
+    @Test
+    void jsonFormatHasColumnsRowsAndNulls() throws IOException {
+        Run r = run("sweep", preset("air-line-reference"), "--at", "1e9,2e9", "--format", "json");
+        assertEquals(0, r.status(), r.err());
+        JsonNode json = new ObjectMapper().readTree(r.out());
+        assertEquals(HEADER, String.join(",", new ObjectMapper().convertValue(json.get("columns"), String[].class)));
+        assertEquals(2, json.get("rows").size());
+        assertTrue(json.get("rows").get(0).get(14).isNull());
+    }
+
+    @Test
+    void limitsMatchTheCore() throws IOException {
+        Run r = run("limits", preset("rooftop-antenna-feeder"), "--threshold", "0.1");
+        assertEquals(0, r.status(), r.err());
+        JsonNode json = new ObjectMapper().readTree(r.out());
+        var design = Presets.load("rooftop-antenna-feeder");
+        FrequencyLimits expected = LimitFinder.find(design.toModel(), design.lengthMetres(), 0.1, 3.0);
+        assertEquals(expected.electricalLengthHz(), json.get("electricalLengthHz").asDouble());
+        assertEquals(expected.lossBudgetHz(), json.get("lossBudgetHz").asDouble());
+        assertEquals(expected.ceilingHz(), json.get("ceilingHz").asDouble());
+        assertEquals(expected.limitedBy().key(), json.get("limitedBy").asText());
+        for (String key : new String[] {"electricalLengthHz", "skinDepthEqualsRadiusHz", "resistanceDoublesHz",
+            "higherModeCutoffHz", "lossBudgetHz", "ceilingHz", "limitedBy"}) {
+            assertTrue(json.has(key), key);
+        }
+        Run open = run("limits", preset("ladder-line-feeder"));
+        assertTrue(open.out().contains("\"higherModeCutoffHz\" : null"), open.out());
+    }
+
+    @ParameterizedTest
+    @ValueSource(strings = {"--from=5mhz", "--points=1", "--to=20THz", "--scale=cubic", "--format=xml", "--at=0Hz",
+        "--bogus", "--points=abc"})
+    void badOptionsExitTwoWithOneClearLine(String option) {
+        Run r = run("sweep", preset("bench-patch-lead"), option);
+        assertEquals(ExitStatus.INVALID_INPUT, r.status(), r.err());
+        assertTrue(r.err().startsWith("error: "), r.err());
+        assertFalse(r.err().contains("\tat "), "no stack trace");
+    }
+
+    @Test
+    void badDesignFilesExitTwo(@TempDir Path dir) throws IOException {
+        Path bad = dir.resolve("bad.json");
+        var tree = DesignFiles.toTree(Presets.load("bench-patch-lead"));
+        ((com.fasterxml.jackson.databind.node.ObjectNode) tree.get("line")).put("innerDiameter", 0.1);
+        Files.writeString(bad, tree.toString());
+        Run r = run("limits", bad.toString());
+        assertEquals(ExitStatus.INVALID_INPUT, r.status(), r.err());
+        assertTrue(r.err().contains("line.innerDiameter"), r.err());
+        assertEquals(ExitStatus.INVALID_INPUT, run("sweep", dir.resolve("none.json").toString()).status());
+    }
+
+    @Test
+    void unwritableOutputExitsFour(@TempDir Path dir) {
+        Run r = run("sweep", preset("bench-patch-lead"), "--out", dir.resolve("no/such/folder/x.csv").toString());
+        assertEquals(ExitStatus.OUTPUT_FAILED, r.status(), r.err());
+        assertTrue(r.err().contains("folder does not exist"), r.err());
+    }
+
+    @Test
+    void outWritesTheFile(@TempDir Path dir) throws IOException {
+        Path csv = dir.resolve("s.csv");
+        Run r = run("sweep", preset("board-trace-50-ohm"), "--points", "3", "--out", csv.toString());
+        assertEquals(0, r.status(), r.err());
+        assertEquals("", r.out());
+        assertTrue(Files.readString(csv).startsWith(HEADER + "\n"));
+    }
+
+    @Test
+    void warningsGoToStandardError() {
+        Run r = run("sweep", preset("air-line-reference"), "--points", "3");
+        assertEquals(0, r.status());
+        assertTrue(r.err().contains("warning: the sweep goes above the first higher-order mode"), r.err());
+    }
+
+    @Test
+    void materialsListsTheCatalogue() {
+        Run r = run("materials");
+        assertEquals(0, r.status());
+        for (String key : new String[] {"copper", "aluminium", "silver", "gold", "brass", "tin", "nickel",
+            "stainless-steel", "perfect", "air", "ptfe", "polyethylene", "foam-polyethylene", "polypropylene",
+            "epoxy-glass", "polyimide", "alumina", "fused-silica", "ptfe-ceramic"}) {
+            assertTrue(r.out().contains(key), key);
+        }
+    }
+}
