@@ -66,7 +66,7 @@ class SpecialFunctionsTest {
         for (double modulus : switches) {
             Complex z = new Complex(modulus / Math.sqrt(2), modulus / Math.sqrt(2));
             Complex[] series = SpecialFunctions.seriesK(z);
-            Complex[] quadrature = SpecialFunctions.quadratureScaledK(z);
+            Complex[] quadrature = SpecialFunctions.continuedFractionScaledK(z);
             Complex[] asymptotic = SpecialFunctions.asymptoticScaledK(z);
             for (int n = 0; n < 2; n++) {
                 Complex scaledSeries = series[n].multiply(z.exp());
@@ -85,6 +85,21 @@ class SpecialFunctionsTest {
             Complex scaled = series[n].multiply(z.negate().exp());
             assertTrue(scaled.subtract(asymptotic[n]).abs() < 1e-11 * asymptotic[n].abs(),
                     "I" + n + " series " + scaled + " vs asymptotic " + asymptotic[n]);
+        }
+    }
+
+    /** Two independent methods for K_n in the middle range agree: Steed's continued fraction and the integral. */
+    @ParameterizedTest
+    @CsvSource({"2.0", "3.7", "8", "14", "19.99"})
+    void continuedFractionAgreesWithTheIntegral(double modulus) {
+        for (double angle : new double[] {0.0, Math.PI / 8, Math.PI / 4, 0.4 * Math.PI}) {
+            Complex z = new Complex(modulus * Math.cos(angle), modulus * Math.sin(angle));
+            Complex[] steed = SpecialFunctions.continuedFractionScaledK(z);
+            Complex[] integral = SpecialFunctions.quadratureScaledK(z);
+            for (int n = 0; n < 2; n++) {
+                assertTrue(steed[n].subtract(integral[n]).abs() < 1e-13 * integral[n].abs(),
+                        "K" + n + "(" + z + "): " + steed[n] + " vs " + integral[n]);
+            }
         }
     }
 
