@@ -1,55 +1,66 @@
 package org.linesweep.app;
 
-import java.util.Locale;
+import java.nio.file.Path;
+import java.util.Optional;
+import java.util.concurrent.ExecutorService;
+import java.util.concurrent.Executors;
+import java.util.prefs.Preferences;
 import javafx.application.Application;
-import javafx.geometry.Insets;
+import javafx.application.Platform;
 import javafx.scene.Scene;
-import javafx.scene.control.Label;
-import javafx.scene.layout.VBox;
+import javafx.stage.FileChooser;
 import javafx.stage.Stage;
-import org.linesweep.design.Design;
-import org.linesweep.design.Units;
+import org.linesweep.app.model.ExplorerModel;
 import org.linesweep.io.Presets;
-import org.linesweep.physics.FrequencyLimits;
-import org.linesweep.physics.LimitFinder;
-import org.linesweep.physics.LineModel;
-import org.linesweep.physics.LinePoint;
 
-/**
- * The explorer window. For now a summary of the default design (its characteristic impedance, loss and
- * frequency limits); the live plots come with the explorer proper.
- */
+/** The JavaFX application: composes the model, a background sweep thread and the window. */
 public final class ExplorerApplication extends Application {
+
+    private ExecutorService worker;
 
     @Override
     public void start(Stage stage) {
-        Design design = Presets.load(Presets.DEFAULT);
-        LineModel model = design.toModel();
-        FrequencyLimits limits = LimitFinder.find(model, design.lengthMetres(), design.threshold(),
-                design.lossBudgetDb());
-        double probeHz = Math.sqrt(design.sweep().fromHz() * design.sweep().toHz());
-        LinePoint point = model.at(probeHz);
-        VBox root = new VBox(8,
-                heading(design.name()),
-                new Label(design.description()),
-                new Label(design.geometry().type().displayName() + ", " + Units.engineering(design.lengthMetres(), "m", 3)
-                        + " long"),
-                new Label(String.format(Locale.ROOT, "At %s: |Z0| = %.2f Ω, attenuation %.4g dB/m",
-                        Units.engineering(probeHz, "Hz", 3), point.z0MagnitudeOhm(), point.alphaDbPerMetre())),
-                new Label("Lumped up to (L/λ = " + design.threshold() + "): "
-                        + Units.engineering(limits.electricalLengthHz(), "Hz", 4)),
-                new Label("First higher-order mode: " + Units.engineering(limits.higherModeCutoffHz(), "Hz", 4)),
-                new Label("Frequency ceiling: " + Units.engineering(limits.ceilingHz(), "Hz", 4)
-                        + (limits.limitedBy() == null ? "" : ", set by " + limits.limitedBy().key())));
-        root.setPadding(new Insets(16));
-        stage.setTitle("LineSweep — " + design.name());
-        stage.setScene(new Scene(root, 640, 300));
+        worker = Executors.newSingleThreadExecutor(r -> {
+            Thread thread = new Thread(r, "linesweep-sweep");
+            thread.setDaemon(true);
+            return thread;
+        });
+        ExplorerModel model = new ExplorerModel(Presets.load(Presets.DEFAULT), worker, Platform::runLater);
+        ExplorerWindow window = new ExplorerWindow(model, new ChooserDialogs(stage),
+                Preferences.userNodeForPackage(ExplorerApplication.class));
+        stage.setScene(new Scene(window.root(), 1440, 900));
+        window.attach(stage);
         stage.show();
     }
 
-    private static Label heading(String text) {
-        Label label = new Label(text);
-        label.setStyle("-fx-font-size: 18px; -fx-font-weight: bold;");
-        return label;
+    @Override
+    public void stop() {
+        if (worker != null) {
+            worker.shutdownNow();
+        }
+    }
+
+    /** File dialogs through the platform's chooser. */
+    private record ChooserDialogs(Stage owner) implements FileDialogs {
+        @Override
+        public Optional<Path> open(String title, String extension) {
+            FileChooser chooser = chooser(title, extension);
+            return Optional.ofNullable(chooser.showOpenDialog(owner)).map(java.io.File::toPath);
+        }
+
+        @Override
+        public Optional<Path> save(String title, String extension, String suggestedName) {
+            FileChooser chooser = chooser(title, extension);
+            chooser.setInitialFileName(suggestedName);
+            return Optional.ofNullable(chooser.showSaveDialog(owner)).map(java.io.File::toPath);
+        }
+
+        private static FileChooser chooser(String title, String extension) {
+            FileChooser chooser = new FileChooser();
+            chooser.setTitle(title);
+            chooser.getExtensionFilters().add(new FileChooser.ExtensionFilter(extension.toUpperCase() + " files",
+                    "*." + extension));
+            return chooser;
+        }
     }
 }

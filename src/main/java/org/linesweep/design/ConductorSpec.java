@@ -44,6 +44,11 @@ public record ConductorSpec(String materialKey, double conductivitySiemensPerMet
                 relativePermeability, roughnessMetres);
     }
 
+    /** This conductor with another conductivity and permeability: a custom material from then on. */
+    public ConductorSpec withValues(double conductivity, double permeability) {
+        return new ConductorSpec(null, conductivity, temperatureCoefficientPerKelvin, permeability, roughnessRmsMetres);
+    }
+
     /** The physics conductor at a temperature. */
     public Conductor toConductor(double temperatureKelvin) {
         return new Conductor(conductivitySiemensPerMetre, temperatureCoefficientPerKelvin, relativePermeability,

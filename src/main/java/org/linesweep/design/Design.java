@@ -79,6 +79,26 @@ public record Design(String name, String description, Geometry geometry, Conduct
                 sweep, threshold, lossBudgetDb);
     }
 
+    public Design withConductor(ConductorSpec newConductor) {
+        return new Design(name, description, geometry, newConductor, dielectric, lengthMetres, temperatureKelvin,
+                sweep, threshold, lossBudgetDb);
+    }
+
+    public Design withDielectric(DielectricSpec newDielectric) {
+        return new Design(name, description, geometry, conductor, newDielectric, lengthMetres, temperatureKelvin,
+                sweep, threshold, lossBudgetDb);
+    }
+
+    public Design withLength(double newLengthMetres) {
+        return new Design(name, description, geometry, conductor, dielectric, newLengthMetres, temperatureKelvin,
+                sweep, threshold, lossBudgetDb);
+    }
+
+    public Design withTemperature(double newTemperatureKelvin) {
+        return new Design(name, description, geometry, conductor, dielectric, lengthMetres, newTemperatureKelvin,
+                sweep, threshold, lossBudgetDb);
+    }
+
     public Design withSweep(SweepSettings newSweep) {
         return new Design(name, description, geometry, conductor, dielectric, lengthMetres, temperatureKelvin,
                 newSweep, threshold, lossBudgetDb);

@@ -54,6 +54,12 @@ public record DielectricSpec(String materialKey, double relativePermittivity, do
                 Dielectric.DEFAULT_BAND_HIGH_HZ);
     }
 
+    /** This dielectric with other values at the same reference frequency: a custom material from then on. */
+    public DielectricSpec withValues(double permittivity, double tangent, DielectricModelKind newModel) {
+        return new DielectricSpec(null, permittivity, tangent, referenceFrequencyHz, conductivitySiemensPerMetre,
+                relativePermeability, newModel, bandLowHz, bandHighHz);
+    }
+
     /** The physics dielectric. */
     public Dielectric toDielectric() {
         return new Dielectric(relativePermittivity, lossTangent, referenceFrequencyHz, conductivitySiemensPerMetre,

@@ -58,6 +58,21 @@ public record Geometry(LineType type, Map<String, Double> valuesMetres) {
         return new Geometry(type, map);
     }
 
+    /**
+     * A sensible starting cross-section for a line type, used when the user switches type: roughly 50 Ω
+     * for the shielded lines in a common dielectric, everyday sizes for the others.
+     */
+    public static Geometry starter(LineType type) {
+        return switch (type) {
+            case COAX -> of(type, 0.9e-3, 2.95e-3, 0.25e-3);
+            case TWO_WIRE -> of(type, 0.6e-3, 1.4e-3);
+            case WIRE_OVER_GROUND -> of(type, 0.5e-3, 3e-3);
+            case PARALLEL_PLATE -> of(type, 60e-3, 0.25e-3, 2e-3);
+            case MICROSTRIP -> of(type, 0.38e-3, 0.2e-3, 35e-6);
+            case STRIPLINE -> of(type, 0.15e-3, 0.5e-3, 17.5e-6);
+        };
+    }
+
     /** One field's value, m. */
     public double value(String field) {
         Double value = valuesMetres.get(field);

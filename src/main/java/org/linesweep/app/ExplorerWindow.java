@@ -1,0 +1,372 @@
+package org.linesweep.app;
+
+import java.io.IOException;
+import java.nio.file.Path;
+import java.util.List;
+import javafx.embed.swing.SwingFXUtils;
+import javafx.geometry.Insets;
+import javafx.scene.Node;
+import javafx.scene.Parent;
+import javafx.scene.control.Alert;
+import javafx.scene.control.ButtonType;
+import javafx.scene.control.CheckMenuItem;
+import javafx.scene.control.Label;
+import javafx.scene.control.Menu;
+import javafx.scene.control.MenuBar;
+import javafx.scene.control.MenuItem;
+import javafx.scene.control.RadioMenuItem;
+import javafx.scene.control.ScrollPane;
+import javafx.scene.control.SeparatorMenuItem;
+import javafx.scene.control.SplitPane;
+import javafx.scene.control.ToggleGroup;
+import javafx.scene.image.WritableImage;
+import javafx.scene.input.KeyCode;
+import javafx.scene.input.KeyCodeCombination;
+import javafx.scene.input.KeyCombination;
+import javafx.scene.layout.BorderPane;
+import javafx.scene.layout.HBox;
+import javafx.scene.layout.Priority;
+import javafx.scene.layout.VBox;
+import javafx.stage.Stage;
+import javax.imageio.ImageIO;
+import org.linesweep.app.model.ExplorerModel;
+import org.linesweep.app.model.SweepSnapshot;
+import org.linesweep.app.model.UnitSystem;
+import org.linesweep.app.view.ComparePane;
+import org.linesweep.app.view.CrossSectionView;
+import org.linesweep.app.view.DesignPanel;
+import org.linesweep.app.view.PlotsPane;
+import org.linesweep.app.view.ReadoutPane;
+import org.linesweep.design.Design;
+import org.linesweep.design.InvalidInputException;
+import org.linesweep.io.AtomicFiles;
+import org.linesweep.io.DesignFiles;
+import org.linesweep.io.Presets;
+import org.linesweep.io.SweepTable;
+
+/**
+ * The explorer window's content: menus, design panel with the cross-section, the four plots, the read-out
+ * and the comparison table. It composes the views around one {@link ExplorerModel} and carries out the
+ * file actions; everything it shows comes from the model.
+ */
+public final class ExplorerWindow {
+
+    /** The cautions shown under Help, as in the README. */
+    public static final String CAUTIONS = String.join("\n\n",
+            "LineSweep's results are estimates from closed-form models of idealised geometry. They are not a"
+                    + " substitute for measurement, or for a field solver where the design is critical.",
+            "High voltage, RF exposure and mains wiring can hurt or kill. Nothing here says whether a cable, bus bar"
+                    + " or board is safe for a voltage, a current or a transmitted power: power handling, insulation,"
+                    + " creepage and clearance, heating and exposure limits are your responsibility.",
+            "Follow your local electrical codes, RF-exposure rules and licensed practice; where they apply, the work"
+                    + " belongs to a qualified, licensed person.");
+
+    private final ExplorerModel model;
+    private final FileDialogs dialogs;
+    private final RecentFiles recent;
+    private final BorderPane root = new BorderPane();
+    private final DesignPanel designPanel;
+    private final PlotsPane plots;
+    private final ReadoutPane readout;
+    private final ComparePane compare;
+    private final CrossSectionView crossSection = new CrossSectionView();
+    private final Label warnings = new Label();
+    private final Label status = new Label();
+    private final Menu recentMenu = new Menu("Recent files");
+    private final ScrollPane designScroll;
+    private Path currentFile;
+    private Stage stage;
+
+    public ExplorerWindow(ExplorerModel model, FileDialogs dialogs, java.util.prefs.Preferences preferences) {
+        this.model = model;
+        this.dialogs = dialogs;
+        this.recent = new RecentFiles(preferences);
+        designPanel = new DesignPanel(model);
+        plots = new PlotsPane(model);
+        readout = new ReadoutPane(model);
+        compare = new ComparePane(model);
+        VBox left = new VBox(crossSection, designPanel);
+        designScroll = new ScrollPane(left);
+        designScroll.setFitToWidth(true);
+        designScroll.setPrefWidth(330);
+        designScroll.setMinWidth(280);
+        warnings.setId("warning-strip");
+        warnings.getStyleClass().add("warning-strip");
+        warnings.setWrapText(true);
+        warnings.setMaxWidth(Double.MAX_VALUE);
+        status.setId("status-message");
+        status.getStyleClass().add("status-message");
+        status.setWrapText(true);
+        status.textProperty().bind(model.messageProperty());
+        VBox top = new VBox(menuBar(), warnings);
+        ScrollPane readoutScroll = new ScrollPane(readout);
+        readoutScroll.setFitToWidth(true);
+        readoutScroll.setPrefWidth(330);
+        SplitPane bottom = new SplitPane(compare, readoutScroll);
+        bottom.setDividerPositions(0.62);
+        bottom.setPrefHeight(230);
+        SplitPane center = new SplitPane(plots, bottom);
+        center.setOrientation(javafx.geometry.Orientation.VERTICAL);
+        center.setDividerPositions(0.7);
+        root.setTop(top);
+        root.setLeft(designScroll);
+        root.setCenter(center);
+        HBox statusBar = new HBox(status);
+        statusBar.setPadding(new Insets(3, 8, 3, 8));
+        HBox.setHgrow(status, Priority.ALWAYS);
+        root.setBottom(statusBar);
+        root.getStyleClass().add("explorer");
+        root.getStylesheets().add(ExplorerWindow.class.getResource("explorer.css").toExternalForm());
+        model.designProperty().addListener((o, old, now) -> crossSection.show(now.geometry()));
+        crossSection.show(model.getDesign().geometry());
+        model.snapshotProperty().addListener((o, old, now) -> showWarnings(now));
+        model.meetingModeProperty().addListener((o, old, now) -> applyMeetingMode(now));
+        refreshRecent();
+    }
+
+    public Parent root() {
+        return root;
+    }
+
+    /** Gives the window its stage: title, full screen and shortcuts that need it. */
+    public void attach(Stage newStage) {
+        this.stage = newStage;
+        updateTitle();
+        model.designProperty().addListener((o, old, now) -> updateTitle());
+    }
+
+    public PlotsPane plots() {
+        return plots;
+    }
+
+    public DesignPanel designPanel() {
+        return designPanel;
+    }
+
+    public ReadoutPane readout() {
+        return readout;
+    }
+
+    public ComparePane compare() {
+        return compare;
+    }
+
+    public Label warningStrip() {
+        return warnings;
+    }
+
+    private void updateTitle() {
+        if (stage != null) {
+            Design d = model.getDesign();
+            stage.setTitle("LineSweep — " + (d.name().isBlank() ? "untitled" : d.name())
+                    + (currentFile == null ? "" : " (" + currentFile.getFileName() + ")"));
+        }
+    }
+
+    private void showWarnings(SweepSnapshot snapshot) {
+        List<String> list = snapshot == null ? List.of() : snapshot.warnings();
+        warnings.setText(list.isEmpty() ? "" : "Outside a model's stated range: " + String.join(" · ", list));
+        warnings.setVisible(!list.isEmpty());
+        warnings.setManaged(!list.isEmpty());
+    }
+
+    private void applyMeetingMode(boolean meeting) {
+        if (meeting) {
+            root.getStyleClass().add("meeting");
+        } else {
+            root.getStyleClass().remove("meeting");
+        }
+        designPanel.secondaryControls().setVisible(!meeting);
+        designPanel.secondaryControls().setManaged(!meeting);
+        if (stage != null) {
+            stage.setFullScreen(meeting);
+        }
+    }
+
+    private MenuBar menuBar() {
+        Menu file = new Menu("File");
+        MenuItem open = item("Open design…", new KeyCodeCombination(KeyCode.O, KeyCombination.SHORTCUT_DOWN),
+                this::openFile);
+        MenuItem save = item("Save design", new KeyCodeCombination(KeyCode.S, KeyCombination.SHORTCUT_DOWN),
+                () -> save(false));
+        MenuItem saveAs = item("Save design as…", new KeyCodeCombination(KeyCode.S, KeyCombination.SHORTCUT_DOWN,
+                KeyCombination.SHIFT_DOWN), () -> save(true));
+        Menu presets = new Menu("Presets");
+        for (String name : Presets.NAMES) {
+            Design preset = Presets.load(name);
+            MenuItem item = new MenuItem(preset.name());
+            item.setOnAction(e -> {
+                currentFile = null;
+                model.open(preset);
+            });
+            presets.getItems().add(item);
+        }
+        MenuItem exportPng = item("Export plots as PNG (2×)…", new KeyCodeCombination(KeyCode.E,
+                KeyCombination.SHORTCUT_DOWN), this::exportPng);
+        MenuItem exportCsv = item("Export sweep as CSV…", new KeyCodeCombination(KeyCode.E,
+                KeyCombination.SHORTCUT_DOWN, KeyCombination.SHIFT_DOWN), this::exportCsv);
+        file.getItems().addAll(open, recentMenu, presets, new SeparatorMenuItem(), save, saveAs,
+                new SeparatorMenuItem(), exportPng, exportCsv);
+        Menu edit = new Menu("Edit");
+        MenuItem undo = item("Undo", new KeyCodeCombination(KeyCode.Z, KeyCombination.SHORTCUT_DOWN), model::undo);
+        MenuItem redo = item("Redo", new KeyCodeCombination(KeyCode.Y, KeyCombination.SHORTCUT_DOWN), model::redo);
+        undo.disableProperty().bind(model.canUndoProperty().not());
+        redo.disableProperty().bind(model.canRedoProperty().not());
+        MenuItem pin = item("Pin current design", new KeyCodeCombination(KeyCode.P, KeyCombination.SHORTCUT_DOWN),
+                model::pinCurrent);
+        MenuItem clearPins = item("Clear pins", null, model::unpinAll);
+        edit.getItems().addAll(undo, redo, new SeparatorMenuItem(), pin, clearPins);
+        Menu view = new Menu("View");
+        CheckMenuItem markers = new CheckMenuItem("Marker mode");
+        markers.setAccelerator(new KeyCodeCombination(KeyCode.M, KeyCombination.SHORTCUT_DOWN));
+        markers.selectedProperty().bindBidirectional(model.markerModeProperty());
+        CheckMenuItem meeting = new CheckMenuItem("Meeting mode (large, high contrast, full screen)");
+        meeting.setAccelerator(new KeyCodeCombination(KeyCode.F5));
+        meeting.selectedProperty().bindBidirectional(model.meetingModeProperty());
+        ToggleGroup units = new ToggleGroup();
+        RadioMenuItem metric = new RadioMenuItem("Metric units (mm, dB/m)");
+        RadioMenuItem imperial = new RadioMenuItem("Imperial units (mil, dB/100 ft)");
+        metric.setToggleGroup(units);
+        imperial.setToggleGroup(units);
+        metric.setSelected(model.unitSystemProperty().get() == UnitSystem.METRIC);
+        imperial.setSelected(model.unitSystemProperty().get() == UnitSystem.IMPERIAL);
+        metric.setOnAction(e -> model.unitSystemProperty().set(UnitSystem.METRIC));
+        imperial.setOnAction(e -> model.unitSystemProperty().set(UnitSystem.IMPERIAL));
+        imperial.setAccelerator(new KeyCodeCombination(KeyCode.U, KeyCombination.SHORTCUT_DOWN));
+        model.unitSystemProperty().addListener((o, old, now) -> (now == UnitSystem.METRIC ? metric : imperial)
+                .setSelected(true));
+        view.getItems().addAll(markers, meeting, new SeparatorMenuItem(), metric, imperial);
+        Menu help = new Menu("Help");
+        MenuItem cautions = item("Cautions", null, () -> info("Cautions", CAUTIONS));
+        MenuItem models = item("Models and validity", null, () -> info("Models and validity", MODELS));
+        help.getItems().addAll(cautions, models);
+        MenuBar bar = new MenuBar(file, edit, view, help);
+        bar.setId("menu-bar");
+        return bar;
+    }
+
+    private static final String MODELS = String.join("\n",
+            "Coax: F = 2π/ln(b/a); exact round-wire (Bessel) inner and exact tube outer conductor (Schelkunoff 1934);"
+                    + " TE11 from the exact Bessel cross-product root.",
+            "Two-wire and wire over ground: acosh forms (exact for ideal geometry) with the proximity factor faded in"
+                    + " with the skin effect; open lines radiate when the spacing nears λ/10 (not modelled).",
+            "Parallel plate: w/d, fringing neglected (flagged below w/d = 10).",
+            "Microstrip: Hammerstad-Jensen 1980 static Z0 and ε_eff (0.01 ≤ w/h ≤ 100), Kirschning-Jansen 1982 dispersion"
+                    + " (0.1 ≤ w/h, εr ≤ 20, h/λ0 ≤ 0.13); conductor loss by Wheeler's incremental-inductance rule.",
+            "Stripline: Cohn 1954 exact zero-thickness Z0 with Wheeler 1978 thickness ratio (0.5 % for W′/(b − t) < 10).",
+            "Conductors: exact finite-thickness surface impedance for flat conductors; Hammerstad roughness.",
+            "Dielectrics: constant loss tangent (not causal) or wideband Debye (Djordjevic-Sarkar 2001, causal).",
+            "See docs/physics.md for sources and ranges.");
+
+    private static MenuItem item(String text, KeyCombination accelerator, Runnable action) {
+        MenuItem item = new MenuItem(text);
+        if (accelerator != null) {
+            item.setAccelerator(accelerator);
+        }
+        item.setOnAction(e -> action.run());
+        return item;
+    }
+
+    private void info(String title, String text) {
+        Alert alert = new Alert(Alert.AlertType.INFORMATION, text, ButtonType.OK);
+        alert.setTitle(title);
+        alert.setHeaderText(title);
+        alert.getDialogPane().setPrefWidth(560);
+        alert.show();
+    }
+
+    /** Opens a design file; a bad file is reported and the current design kept. */
+    public void openFile() {
+        dialogs.open("Open design", "json").ifPresent(this::open);
+    }
+
+    /** Opens a design file by path. */
+    public void open(Path path) {
+        try {
+            Design design = DesignFiles.read(path);
+            currentFile = path;
+            model.open(design);
+            recent.add(path);
+            refreshRecent();
+        } catch (InvalidInputException e) {
+            model.report("Could not open " + path.getFileName() + ": " + e.getMessage()
+                    + ". The current design is unchanged.");
+        }
+    }
+
+    private void refreshRecent() {
+        recentMenu.getItems().clear();
+        for (Path path : recent.list()) {
+            MenuItem item = new MenuItem(path.toString());
+            item.setOnAction(e -> open(path));
+            recentMenu.getItems().add(item);
+        }
+        recentMenu.setDisable(recentMenu.getItems().isEmpty());
+    }
+
+    /** Saves the design, atomically; a failed save leaves the old file as it was and says why. */
+    public void save(boolean askForName) {
+        Path target = currentFile;
+        if (askForName || target == null) {
+            String suggested = model.getDesign().name().isBlank() ? "design.json"
+                    : model.getDesign().name().replaceAll("[^A-Za-z0-9]+", "-").toLowerCase() + ".json";
+            target = dialogs.save("Save design", "json", suggested).orElse(null);
+        }
+        if (target == null) {
+            return;
+        }
+        try {
+            DesignFiles.write(model.getDesign(), target);
+            currentFile = target;
+            recent.add(target);
+            refreshRecent();
+            updateTitle();
+            model.report("Saved " + target.getFileName());
+        } catch (IOException | RuntimeException e) {
+            model.report("Could not save " + target.getFileName() + ": " + e.getMessage()
+                    + ". Any earlier file there is unchanged.");
+        }
+    }
+
+    /** Exports the four plots as one PNG at twice the screen scale. */
+    public void exportPng() {
+        dialogs.save("Export plots", "png", "linesweep-plots.png").ifPresent(this::exportPng);
+    }
+
+    public void exportPng(Path target) {
+        WritableImage image = snapshotPlots(2.0);
+        try {
+            AtomicFiles.write(target, out -> ImageIO.write(SwingFXUtils.fromFXImage(image, null), "png", out));
+            model.report("Exported " + target.getFileName());
+        } catch (IOException | RuntimeException e) {
+            model.report("Could not export " + target.getFileName() + ": " + e.getMessage());
+        }
+    }
+
+    /** The plots as an image at a scale. */
+    public WritableImage snapshotPlots(double scale) {
+        javafx.scene.SnapshotParameters parameters = new javafx.scene.SnapshotParameters();
+        parameters.setTransform(javafx.scene.transform.Transform.scale(scale, scale));
+        Node node = plots;
+        return node.snapshot(parameters, null);
+    }
+
+    /** Exports the live sweep as CSV with the command line's columns. */
+    public void exportCsv() {
+        dialogs.save("Export sweep", "csv", "linesweep-sweep.csv").ifPresent(this::exportCsv);
+    }
+
+    public void exportCsv(Path target) {
+        SweepSnapshot snapshot = model.snapshotProperty().get();
+        if (snapshot == null) {
+            model.report("Nothing computed yet to export.");
+            return;
+        }
+        try {
+            AtomicFiles.write(target, out -> SweepTable.writeCsv(snapshot.sweep(), out));
+            model.report("Exported " + target.getFileName());
+        } catch (IOException | RuntimeException e) {
+            model.report("Could not export " + target.getFileName() + ": " + e.getMessage());
+        }
+    }
+}

@@ -1,0 +1,355 @@
+package org.linesweep.app.view;
+
+import java.util.ArrayList;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Map;
+import java.util.function.DoubleFunction;
+import javafx.collections.FXCollections;
+import javafx.geometry.Insets;
+import javafx.scene.control.ComboBox;
+import javafx.scene.control.Label;
+import javafx.scene.control.ListCell;
+import javafx.scene.control.Separator;
+import javafx.scene.control.ToggleButton;
+import javafx.scene.control.ToggleGroup;
+import javafx.scene.control.Tooltip;
+import javafx.scene.layout.HBox;
+import javafx.scene.layout.VBox;
+import org.linesweep.app.model.ExplorerModel;
+import org.linesweep.design.ConductorSpec;
+import org.linesweep.design.Design;
+import org.linesweep.design.DielectricSpec;
+import org.linesweep.design.Geometry;
+import org.linesweep.design.GeometryField;
+import org.linesweep.design.Rule;
+import org.linesweep.design.SweepSettings;
+import org.linesweep.physics.ConductorMaterial;
+import org.linesweep.physics.DielectricMaterial;
+import org.linesweep.physics.DielectricModelKind;
+import org.linesweep.physics.LineType;
+
+/**
+ * The design editor: line type, one control per geometry field, conductor, dielectric, length, temperature,
+ * sweep and the marker threshold. It shows the model's design and turns every edit into a model change;
+ * a refused edit shows the model's message under the field and the design stays as it was.
+ */
+public final class DesignPanel extends VBox {
+
+    private static final String CUSTOM = "custom";
+
+    private final ExplorerModel model;
+    private final ComboBox<LineType> type = new ComboBox<>(FXCollections.observableArrayList(LineType.values()));
+    private final VBox geometryBox = new VBox(2);
+    private final Map<String, QuantityControl> geometryControls = new LinkedHashMap<>();
+    private final ComboBox<String> conductor = new ComboBox<>();
+    private final ComboBox<String> dielectric = new ComboBox<>();
+    private final ComboBox<DielectricModelKind> dielectricModel =
+            new ComboBox<>(FXCollections.observableArrayList(DielectricModelKind.values()));
+    private final QuantityControl conductivity;
+    private final QuantityControl conductorPermeability;
+    private final QuantityControl roughness;
+    private final QuantityControl temperature;
+    private final QuantityControl permittivity;
+    private final QuantityControl lossTangent;
+    private final QuantityControl lineLength;
+    private final QuantityControl sweepFrom;
+    private final QuantityControl sweepTo;
+    private final QuantityControl sweepPoints;
+    private final QuantityControl threshold;
+    private final QuantityControl lossBudget;
+    private final ToggleGroup thresholdChoices = new ToggleGroup();
+    private final VBox secondary = new VBox(2);
+    private LineType shownType;
+    private boolean updating;
+
+    public DesignPanel(ExplorerModel model) {
+        this.model = model;
+        getStyleClass().add("design-panel");
+        setSpacing(4);
+        setPadding(new Insets(10));
+        setPrefWidth(300);
+        type.setId("line-type");
+        type.setMaxWidth(Double.MAX_VALUE);
+        type.setCellFactory(v -> typeCell());
+        type.setButtonCell(typeCell());
+        type.valueProperty().addListener((o, old, now) -> {
+            if (!updating && now != null && now != model.getDesign().geometry().type()) {
+                model.apply(d -> d.withGeometry(Geometry.starter(now)));
+            }
+        });
+        conductor.getItems().addAll(keys(ConductorMaterial.values()));
+        conductor.getItems().add(CUSTOM);
+        conductor.setId("conductor-material");
+        conductor.setMaxWidth(Double.MAX_VALUE);
+        conductor.valueProperty().addListener((o, old, now) -> {
+            if (!updating && now != null && !now.equals(CUSTOM)) {
+                ConductorMaterial m = ConductorMaterial.byKey(now).orElseThrow();
+                model.apply(d -> d.withConductor(ConductorSpec.of(m).withRoughness(d.conductor().roughnessRmsMetres())));
+            }
+        });
+        dielectric.getItems().addAll(keys(DielectricMaterial.values()));
+        dielectric.getItems().add(CUSTOM);
+        dielectric.setId("dielectric-material");
+        dielectric.setMaxWidth(Double.MAX_VALUE);
+        dielectric.valueProperty().addListener((o, old, now) -> {
+            if (!updating && now != null && !now.equals(CUSTOM)) {
+                model.apply(d -> d.withDielectric(DielectricSpec.of(DielectricMaterial.byKey(now).orElseThrow())));
+            }
+        });
+        dielectricModel.setId("dielectric-model");
+        dielectricModel.setConverter(new javafx.util.StringConverter<>() {
+            @Override
+            public String toString(DielectricModelKind kind) {
+                return kind == null ? "" : kind == DielectricModelKind.CONSTANT ? "constant loss tangent (not causal)"
+                        : "wideband Debye (causal)";
+            }
+
+            @Override
+            public DielectricModelKind fromString(String text) {
+                return null;
+            }
+        });
+        dielectricModel.setMaxWidth(Double.MAX_VALUE);
+        dielectricModel.setTooltip(new Tooltip("constant: ε′ and tan δ fixed (not causal). wideband-debye: the causal"
+                + " Djordjevic-Sarkar model fitted at the reference frequency, band 1 kHz to 1 THz."));
+        dielectricModel.valueProperty().addListener((o, old, now) -> {
+            if (!updating && now != null) {
+                model.apply(d -> d.withDielectric(d.dielectric().withValues(d.dielectric().relativePermittivity(),
+                        d.dielectric().lossTangent(), now)));
+            }
+        });
+        conductivity = plain("Conductivity (S/m)", "conductor.conductivity", Rule.CONDUCTIVITY, Display::number,
+                v -> model.apply(d -> d.withConductor(d.conductor().withValues(v, d.conductor().relativePermeability()))));
+        conductorPermeability = plain("Conductor μr", "conductor.permeability", Rule.PERMEABILITY, Display::number,
+                v -> model.apply(d -> d.withConductor(d.conductor().withValues(d.conductor().conductivitySiemensPerMetre(),
+                        v))));
+        roughness = plain("Roughness (RMS)", "conductor.roughnessRms", Rule.ROUGHNESS, v -> Display.length(v,
+                model.unitSystemProperty().get()), v -> model.apply(d -> d.withConductor(d.conductor().withRoughness(v))));
+        temperature = plain("Temperature", "temperature", Rule.TEMPERATURE, Display::celsius,
+                v -> model.apply(d -> d.withTemperature(v)));
+        permittivity = plain("Permittivity εr", "dielectric.permittivity", Rule.PERMITTIVITY, Display::number,
+                v -> model.apply(d -> d.withDielectric(d.dielectric().withValues(v, d.dielectric().lossTangent(),
+                        d.dielectric().model()))));
+        lossTangent = plain("Loss tangent", "dielectric.lossTangent", Rule.LOSS_TANGENT, Display::number,
+                v -> model.apply(d -> d.withDielectric(d.dielectric().withValues(d.dielectric().relativePermittivity(), v,
+                        d.dielectric().model()))));
+        lineLength = slider("Line length", "length", Rule.LINE_LENGTH,
+                v -> Display.lineLength(v, model.unitSystemProperty().get()), Design::withLength);
+        sweepFrom = plain("Sweep from", "sweep.from", Rule.FREQUENCY, Display::frequency,
+                v -> model.apply(d -> d.withSweep(new SweepSettings(v, d.sweep().toHz(), d.sweep().points(),
+                        d.sweep().scale()))));
+        sweepTo = plain("Sweep to", "sweep.to", Rule.FREQUENCY, Display::frequency,
+                v -> model.apply(d -> d.withSweep(new SweepSettings(d.sweep().fromHz(), v, d.sweep().points(),
+                        d.sweep().scale()))));
+        sweepPoints = plain("Points", "sweep.points", Rule.POINTS, v -> String.valueOf((long) v),
+                v -> model.apply(d -> d.withSweep(new SweepSettings(d.sweep().fromHz(), d.sweep().toHz(), (int) v,
+                        d.sweep().scale()))));
+        threshold = plain("L/λ threshold", "threshold", Rule.THRESHOLD, Display::number,
+                v -> model.apply(d -> d.withThreshold(v)));
+        lossBudget = plain("Loss budget (dB)", "lossBudget", Rule.LOSS_BUDGET, Display::number,
+                v -> model.apply(d -> d.withLossBudget(v)));
+        HBox quick = new HBox(4);
+        for (double choice : new double[] {0.01, 0.05, 0.1}) {
+            ToggleButton button = new ToggleButton(Display.number(choice));
+            button.setId("threshold-" + Display.number(choice).replace('.', '_'));
+            button.setToggleGroup(thresholdChoices);
+            button.setUserData(choice);
+            button.setOnAction(e -> model.apply(d -> d.withThreshold(choice)));
+            quick.getChildren().add(button);
+        }
+        Label quickLabel = new Label("Quick thresholds:");
+        HBox quickRow = new HBox(6, quickLabel, quick);
+        secondary.getChildren().addAll(heading("Sweep"), sweepFrom, sweepTo, sweepPoints);
+        getChildren().addAll(heading("Line"), type, geometryBox, lineLength, new Separator(),
+                heading("Conductor"), conductor, conductivity, conductorPermeability, roughness, temperature,
+                new Separator(), heading("Dielectric"), dielectric, permittivity, lossTangent, dielectricModel,
+                new Separator(), heading("Limits"), threshold, quickRow, lossBudget, new Separator(), secondary);
+        model.designProperty().addListener((o, old, now) -> show(now));
+        model.unitSystemProperty().addListener((o, old, now) -> refreshFormats());
+        model.messageProperty().addListener((o, old, now) -> {
+            if (now == null || now.isEmpty()) {
+                allControls().forEach(c -> c.setMessage(""));
+            }
+        });
+        show(model.getDesign());
+    }
+
+    /** Controls shown only outside meeting mode. */
+    public VBox secondaryControls() {
+        return secondary;
+    }
+
+    /** The control of a geometry field, by its design-file name (for tests). */
+    public QuantityControl geometryControl(String field) {
+        return geometryControls.get(field);
+    }
+
+    public QuantityControl lineLengthControl() {
+        return lineLength;
+    }
+
+    private List<QuantityControl> allControls() {
+        List<QuantityControl> all = new ArrayList<>(geometryControls.values());
+        all.addAll(List.of(conductivity, conductorPermeability, roughness, temperature, permittivity, lossTangent,
+                lineLength, sweepFrom, sweepTo, sweepPoints, threshold, lossBudget));
+        return all;
+    }
+
+    private static Label heading(String text) {
+        Label label = new Label(text);
+        label.getStyleClass().add("panel-heading");
+        return label;
+    }
+
+    private static ListCell<LineType> typeCell() {
+        return new ListCell<>() {
+            @Override
+            protected void updateItem(LineType item, boolean empty) {
+                super.updateItem(item, empty);
+                setText(empty || item == null ? "" : item.displayName());
+            }
+        };
+    }
+
+    private static List<String> keys(ConductorMaterial[] values) {
+        List<String> keys = new ArrayList<>();
+        for (ConductorMaterial m : values) {
+            keys.add(m.key());
+        }
+        return keys;
+    }
+
+    private static List<String> keys(DielectricMaterial[] values) {
+        List<String> keys = new ArrayList<>();
+        for (DielectricMaterial m : values) {
+            keys.add(m.key());
+        }
+        return keys;
+    }
+
+    /** A field without a slider; the message comes from the model when the design refuses the value. */
+    private QuantityControl plain(String label, String field, Rule rule, DoubleFunction<String> format,
+            java.util.function.DoublePredicate commit) {
+        QuantityControl[] holder = new QuantityControl[1];
+        holder[0] = new QuantityControl(label, field, rule, false, format, new QuantityControl.Listener() {
+            @Override
+            public void dragStarted() {
+            }
+
+            @Override
+            public boolean dragged(double value) {
+                return committed(value);
+            }
+
+            @Override
+            public void dragEnded() {
+            }
+
+            @Override
+            public boolean committed(double value) {
+                boolean ok = commit.test(value);
+                if (!ok) {
+                    holder[0].setMessage(model.messageProperty().get());
+                }
+                return ok;
+            }
+        });
+        return holder[0];
+    }
+
+    /** A field with a log slider; dragging is one undo step. */
+    private QuantityControl slider(String label, String field, Rule rule, DoubleFunction<String> format,
+            java.util.function.BiFunction<Design, Double, Design> change) {
+        QuantityControl[] holder = new QuantityControl[1];
+        holder[0] = new QuantityControl(label, field, rule, true, format, new QuantityControl.Listener() {
+            @Override
+            public void dragStarted() {
+                model.beginDrag();
+            }
+
+            @Override
+            public boolean dragged(double value) {
+                boolean ok = model.drag(d -> change.apply(d, value));
+                holder[0].setMessage(ok ? "" : model.messageProperty().get());
+                return ok;
+            }
+
+            @Override
+            public void dragEnded() {
+                model.endDrag();
+            }
+
+            @Override
+            public boolean committed(double value) {
+                boolean ok = model.apply(d -> change.apply(d, value));
+                holder[0].setMessage(ok ? "" : model.messageProperty().get());
+                return ok;
+            }
+        });
+        return holder[0];
+    }
+
+    private void rebuildGeometry(LineType lineType) {
+        geometryControls.clear();
+        geometryBox.getChildren().clear();
+        for (GeometryField field : GeometryField.of(lineType)) {
+            QuantityControl control = slider(field.label(), "line." + field.name(), field.rule(),
+                    v -> Display.length(v, model.unitSystemProperty().get()),
+                    (d, v) -> d.withGeometryValue(field.name(), v));
+            geometryControls.put(field.name(), control);
+            geometryBox.getChildren().add(control);
+        }
+        shownType = lineType;
+    }
+
+    private void refreshFormats() {
+        for (QuantityControl c : geometryControls.values()) {
+            c.setFormatter(v -> Display.length(v, model.unitSystemProperty().get()));
+        }
+        roughness.setFormatter(v -> Display.length(v, model.unitSystemProperty().get()));
+        lineLength.setFormatter(v -> Display.lineLength(v, model.unitSystemProperty().get()));
+    }
+
+    private void show(Design design) {
+        updating = true;
+        try {
+            LineType lineType = design.geometry().type();
+            if (lineType != shownType) {
+                rebuildGeometry(lineType);
+            }
+            type.setValue(lineType);
+            design.geometry().valuesMetres().forEach((name, value) -> geometryControls.get(name).show(value));
+            lineLength.show(design.lengthMetres());
+            ConductorSpec c = design.conductor();
+            conductor.setValue(c.materialKey() == null ? CUSTOM : c.materialKey());
+            boolean perfect = c.isPerfect();
+            conductivity.setDisable(perfect);
+            conductorPermeability.setDisable(perfect);
+            if (!perfect) {
+                conductivity.show(c.conductivitySiemensPerMetre());
+            }
+            conductorPermeability.show(c.relativePermeability());
+            roughness.show(c.roughnessRmsMetres());
+            temperature.show(design.temperatureKelvin());
+            DielectricSpec d = design.dielectric();
+            dielectric.setValue(d.materialKey() == null ? CUSTOM : d.materialKey());
+            permittivity.show(d.relativePermittivity());
+            lossTangent.show(d.lossTangent());
+            dielectricModel.setValue(d.model());
+            sweepFrom.show(design.sweep().fromHz());
+            sweepTo.show(design.sweep().toHz());
+            sweepPoints.show(design.sweep().points());
+            threshold.show(design.threshold());
+            thresholdChoices.getToggles().forEach(t -> t.setSelected(((Double) t.getUserData()) == design.threshold()));
+            if (Double.isNaN(design.lossBudgetDb())) {
+                lossBudget.textField().setText("");
+                lossBudget.textField().setPromptText("none");
+            } else {
+                lossBudget.show(design.lossBudgetDb());
+            }
+        } finally {
+            updating = false;
+        }
+    }
+}

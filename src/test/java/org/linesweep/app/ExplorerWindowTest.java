@@ -1,0 +1,227 @@
+package org.linesweep.app;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertFalse;
+import static org.junit.jupiter.api.Assertions.assertNotNull;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import java.io.IOException;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.List;
+import java.util.Optional;
+import java.util.concurrent.ExecutorService;
+import java.util.concurrent.Executors;
+import java.util.concurrent.TimeUnit;
+import java.util.concurrent.TimeoutException;
+import java.util.prefs.Preferences;
+import javafx.application.Platform;
+import javafx.scene.Scene;
+import javafx.scene.control.Slider;
+import javafx.scene.input.KeyCode;
+import javafx.stage.Stage;
+import javax.imageio.ImageIO;
+import org.junit.jupiter.api.AfterEach;
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.extension.ExtendWith;
+import org.junit.jupiter.api.io.TempDir;
+import org.linesweep.app.model.ExplorerModel;
+import org.linesweep.app.model.SweepSnapshot;
+import org.linesweep.app.view.FrequencyPlot;
+import org.linesweep.app.view.PlotMarker;
+import org.linesweep.design.Design;
+import org.linesweep.io.Presets;
+import org.linesweep.io.SweepTable;
+import org.linesweep.physics.FrequencyLimits;
+import org.linesweep.physics.LimitFinder;
+import org.testfx.api.FxRobot;
+import org.testfx.framework.junit5.ApplicationExtension;
+import org.testfx.framework.junit5.Start;
+import org.testfx.util.WaitForAsyncUtils;
+
+/**
+ * One walk through the real window, headless: open a preset, drag a geometry slider, toggle marker mode,
+ * pin and compare, type an invalid value, export CSV and PNG and read them back.
+ */
+@ExtendWith(ApplicationExtension.class)
+class ExplorerWindowTest {
+
+    @TempDir
+    Path folder;
+
+    private ExecutorService worker;
+    private ExplorerModel model;
+    private ExplorerWindow window;
+    private final StubDialogs dialogs = new StubDialogs();
+    /** Exceptions nobody caught, on any thread; a test fails if one occurred. */
+    private final List<Throwable> uncaught = new java.util.concurrent.CopyOnWriteArrayList<>();
+
+    /** File dialogs that answer with a path chosen by the test. */
+    static final class StubDialogs implements FileDialogs {
+        Path next;
+
+        @Override
+        public Optional<Path> open(String title, String extension) {
+            return Optional.ofNullable(next);
+        }
+
+        @Override
+        public Optional<Path> save(String title, String extension, String suggestedName) {
+            return Optional.ofNullable(next);
+        }
+    }
+
+    @Start
+    void start(Stage stage) throws Exception {
+        Thread.setDefaultUncaughtExceptionHandler((t, e) -> uncaught.add(e));
+        Thread.currentThread().setUncaughtExceptionHandler((t, e) -> uncaught.add(e));
+        worker = Executors.newSingleThreadExecutor();
+        model = new ExplorerModel(Presets.load("bench-patch-lead"), worker, Platform::runLater);
+        Preferences preferences = Preferences.userRoot().node("org/linesweep/test-" + System.nanoTime());
+        window = new ExplorerWindow(model, dialogs, preferences);
+        stage.setScene(new Scene(window.root(), 1400, 900));
+        window.attach(stage);
+        stage.show();
+    }
+
+    @AfterEach
+    void stop() {
+        worker.shutdownNow();
+        if (!uncaught.isEmpty()) {
+            AssertionError failure = new AssertionError("uncaught exception on the FX thread: " + uncaught.get(0),
+                    uncaught.get(0));
+            uncaught.clear();
+            throw failure;
+        }
+    }
+
+    /** Waits until the computation has caught up with the design. */
+    private void settle() throws TimeoutException {
+        WaitForAsyncUtils.waitFor(10, TimeUnit.SECONDS, () -> {
+            SweepSnapshot s = model.snapshotProperty().get();
+            return s != null && s.design().equals(model.getDesign());
+        });
+        WaitForAsyncUtils.waitForFxEvents();
+    }
+
+    private double readoutZ0() {
+        String text = window.readout().value("|Z0|");
+        return Double.parseDouble(text.substring(0, text.indexOf(' ')));
+    }
+
+    @Test
+    void draggingTheOuterDiameterUpRaisesZ0(FxRobot robot) throws TimeoutException {
+        settle();
+        double before = readoutZ0();
+        int drawsBefore = window.plots().impedancePlot().drawCount();
+        Slider slider = window.designPanel().geometryControl("outerDiameter").slider();
+        robot.drag(slider.lookup(".thumb")).moveBy(40, 0).release(javafx.scene.input.MouseButton.PRIMARY);
+        settle();
+        assertTrue(model.getDesign().geometry().value("outerDiameter") > 2.95e-3, "the slider moved the design");
+        assertTrue(readoutZ0() > before, "wider gap, higher Z0: " + before + " -> " + readoutZ0());
+        assertTrue(window.plots().impedancePlot().drawCount() > drawsBefore, "the curve was redrawn");
+        assertTrue(model.canUndoProperty().get());
+        robot.interact(() -> { model.undo(); });
+        settle();
+        assertEquals(2.95e-3, model.getDesign().geometry().value("outerDiameter"), 1e-15, "the drag is one undo step");
+    }
+
+    @Test
+    void markersAgreeWithTheCoreLimits(FxRobot robot) throws TimeoutException {
+        settle();
+        robot.interact(() -> model.markerModeProperty().set(false));
+        assertTrue(window.plots().attenuationPlot().getMarkers().isEmpty());
+        robot.interact(() -> model.markerModeProperty().set(true));
+        Design d = model.getDesign();
+        FrequencyLimits limits = LimitFinder.find(d.toModel(), d.lengthMetres(), d.threshold(), d.lossBudgetDb());
+        List<Double> shown = window.plots().attenuationPlot().getMarkers().stream().map(PlotMarker::frequencyHz).toList();
+        assertTrue(shown.contains(limits.electricalLengthHz()));
+        assertTrue(shown.contains(limits.skinDepthEqualsRadiusHz()));
+        assertTrue(shown.contains(limits.resistanceDoublesHz()));
+        assertTrue(shown.contains(limits.higherModeCutoffHz()));
+        assertTrue(window.readout().ceilingLabel().getText().contains("electrical length"));
+        var tenthButton = robot.lookup("#threshold-0_1").queryAs(javafx.scene.control.ToggleButton.class);
+        robot.interact(tenthButton::fire);
+        settle();
+        FrequencyLimits tenth = LimitFinder.find(model.getDesign().toModel(), d.lengthMetres(), 0.1, Double.NaN);
+        assertTrue(window.plots().attenuationPlot().getMarkers().stream()
+                .anyMatch(m -> m.frequencyHz() == tenth.electricalLengthHz()));
+    }
+
+    @Test
+    void pinAndCompare(FxRobot robot) throws TimeoutException {
+        settle();
+        robot.clickOn("#pin-button");
+        assertEquals(1, model.pins().size());
+        robot.interact(() -> model.apply(d -> d.withGeometryValue("outerDiameter", 3.6e-3)));
+        settle();
+        FrequencyPlot plot = window.plots().impedancePlot();
+        assertTrue(plot.getSeries().stream().anyMatch(s -> s.name().startsWith("Pin 1")), "pinned curve on the plot");
+        assertEquals(1, window.compare().table().getItems().size());
+        String difference = window.compare().table().getColumns().get(3).getCellData(0).toString();
+        assertTrue(difference.startsWith("-"), "the pin has the narrower gap, so lower Z0: " + difference);
+    }
+
+    @Test
+    void invalidInputShowsAMessageAndKeepsTheDesign(FxRobot robot) throws TimeoutException {
+        settle();
+        Design before = model.getDesign();
+        robot.doubleClickOn("#line-innerDiameter").eraseText(12).write("3.5 mm").type(KeyCode.ENTER);
+        WaitForAsyncUtils.waitForFxEvents();
+        assertEquals(before, model.getDesign());
+        var message = window.designPanel().geometryControl("innerDiameter").messageLabel();
+        assertTrue(message.isVisible());
+        assertTrue(message.getText().contains("line.innerDiameter"), message.getText());
+        robot.doubleClickOn("#line-innerDiameter").eraseText(12).write("10 mmm").type(KeyCode.ENTER);
+        WaitForAsyncUtils.waitForFxEvents();
+        assertEquals(before, model.getDesign());
+        assertTrue(message.getText().contains("unknown unit"), message.getText());
+        robot.doubleClickOn("#line-innerDiameter").eraseText(12).write("35 mil").type(KeyCode.ENTER);
+        settle();
+        assertEquals(889e-6, model.getDesign().geometry().value("innerDiameter"), 1e-12);
+        assertFalse(message.isVisible());
+    }
+
+    @Test
+    void exportsCsvAndPngThatReadBack(FxRobot robot) throws TimeoutException, IOException {
+        settle();
+        Path csv = folder.resolve("sweep.csv");
+        dialogs.next = csv;
+        robot.interact(() -> window.exportCsv());
+        List<String> lines = Files.readAllLines(csv);
+        assertEquals(SweepTable.csvHeader(), lines.get(0));
+        assertEquals(model.getDesign().sweep().points() + 1, lines.size());
+        Path png = folder.resolve("plots.png");
+        dialogs.next = png;
+        robot.interact(() -> window.exportPng());
+        var image = ImageIO.read(png.toFile());
+        assertNotNull(image);
+        assertEquals(2 * window.plots().getWidth(), image.getWidth(), 2, "exported at twice the scale");
+    }
+
+    @Test
+    void openingABadFileKeepsTheDesign(FxRobot robot) throws IOException, TimeoutException {
+        settle();
+        Design before = model.getDesign();
+        Path bad = folder.resolve("bad.json");
+        Files.writeString(bad, "{ not json");
+        dialogs.next = bad;
+        robot.interact(() -> window.openFile());
+        assertEquals(before, model.getDesign());
+        assertTrue(model.messageProperty().get().contains("Could not open"), model.messageProperty().get());
+        assertEquals("{ not json", Files.readString(bad), "the bad file is left untouched");
+    }
+
+    @Test
+    void meetingModeAndUnits(FxRobot robot) throws TimeoutException {
+        settle();
+        robot.interact(() -> model.meetingModeProperty().set(true));
+        assertTrue(window.root().getStyleClass().contains("meeting"));
+        assertFalse(window.designPanel().secondaryControls().isVisible());
+        robot.interact(() -> model.unitSystemProperty().set(org.linesweep.app.model.UnitSystem.IMPERIAL));
+        String text = window.designPanel().geometryControl("innerDiameter").textField().getText();
+        assertTrue(text.endsWith("mil"), text);
+        robot.interact(() -> model.meetingModeProperty().set(false));
+        assertTrue(window.designPanel().secondaryControls().isVisible());
+    }
+}

@@ -1,0 +1,179 @@
+package org.linesweep.app.view;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import java.util.List;
+import javafx.scene.Scene;
+import javafx.scene.image.PixelReader;
+import javafx.scene.image.WritableImage;
+import javafx.scene.layout.StackPane;
+import javafx.scene.paint.Color;
+import javafx.stage.Stage;
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.extension.ExtendWith;
+import org.testfx.api.FxRobot;
+import org.testfx.framework.junit5.ApplicationExtension;
+import org.testfx.framework.junit5.Start;
+import org.testfx.util.WaitForAsyncUtils;
+
+/** The plot component mounted alone: axis mapping, decimation faithful to the full drawing, snapshots. */
+@ExtendWith(ApplicationExtension.class)
+class FrequencyPlotTest {
+
+    private static final int WIDTH = 420;
+    private static final int HEIGHT = 260;
+    private FrequencyPlot plot;
+
+    @Start
+    void start(Stage stage) {
+        plot = new FrequencyPlot();
+        plot.setPrefSize(WIDTH, HEIGHT);
+        stage.setScene(new Scene(new StackPane(plot), WIDTH, HEIGHT));
+        stage.show();
+    }
+
+    /** A curve of many points: y = amplitude·sin(k·log10 f)·e^(−u/5), with a spike narrower than a pixel. */
+    private static PlotSeries curve(int points, double amplitude, double wavenumber, Color color) {
+        double[] x = new double[points];
+        double[] y = new double[points];
+        for (int i = 0; i < points; i++) {
+            x[i] = Math.pow(10, 3 + 7.0 * i / (points - 1));
+            double u = Math.log10(x[i]);
+            y[i] = amplitude * Math.sin(wavenumber * u) * Math.exp(-u / 5) + (Math.abs(u - 6.3) < 0.003 ? 3 : 0);
+        }
+        return new PlotSeries("", x, y, points, color, 1.0, new double[0], false);
+    }
+
+    /** Topmost and bottommost tinted pixel per column (−1 where the column is empty). */
+    private static int[][] extents(WritableImage image) {
+        PixelReader reader = image.getPixelReader();
+        int w = (int) image.getWidth();
+        int h = (int) image.getHeight();
+        int[][] out = new int[w][2];
+        for (int x = 0; x < w; x++) {
+            out[x][0] = -1;
+            out[x][1] = -1;
+            for (int y = 0; y < h; y++) {
+                Color c = reader.getColor(x, y);
+                // any pixel visibly tinted by the red curve, however partly covered by anti-aliasing
+                if (c.getRed() - c.getGreen() > 0.12 && c.getRed() - c.getBlue() > 0.12) {
+                    if (out[x][0] < 0) {
+                        out[x][0] = y;
+                    }
+                    out[x][1] = y;
+                }
+            }
+        }
+        return out;
+    }
+
+    /** Draws a series decimated and in full; returns both pixel extents. */
+    private int[][][] drawBothWays(FxRobot robot, PlotSeries series) {
+        robot.interact(() -> {
+            plot.setDecimation(true);
+            plot.setFrequencyRange(1e3, 1e10);
+            plot.setLeftAxis("", FrequencyPlot.Scale.LINEAR);
+            plot.setSeries(List.of(series));
+        });
+        WaitForAsyncUtils.waitForFxEvents();
+        WritableImage[] decimated = new WritableImage[1];
+        robot.interact(() -> decimated[0] = plot.snapshot(1));
+        robot.interact(() -> plot.setDecimation(false));
+        WritableImage[] full = new WritableImage[1];
+        robot.interact(() -> full[0] = plot.snapshot(1));
+        return new int[][][] {extents(decimated[0]), extents(full[0])};
+    }
+
+    /** The union of a column's extent with its two neighbours'. */
+    private static int[] window(int[][] extents, int x) {
+        int top = Integer.MAX_VALUE;
+        int bottom = -1;
+        for (int i = x - 1; i <= x + 1; i++) {
+            if (extents[i][0] >= 0) {
+                top = Math.min(top, extents[i][0]);
+                bottom = Math.max(bottom, extents[i][1]);
+            }
+        }
+        return bottom < 0 ? new int[] {-1, -1} : new int[] {top, bottom};
+    }
+
+    /** True when an extent lies inside another, give or take a tolerance; an empty extent is inside anything. */
+    private static boolean inside(int[] extent, int[] container, int tolerance) {
+        if (extent[0] < 0) {
+            return true;
+        }
+        return container[0] >= 0 && extent[0] >= container[0] - tolerance && extent[1] <= container[1] + tolerance;
+    }
+
+    /** Plot-area columns, less two at each end where the paths start at the column centre or the exact point. */
+    private int[] columns() {
+        return new int[] {(int) Math.ceil(plot.xOf(1e3)) + 2, (int) Math.floor(plot.xOf(1e10)) - 2};
+    }
+
+    /**
+     * 200 000 points of a gently sloping curve with a spike one third of a pixel wide: the decimated drawing
+     * matches the full drawing column by column within 2 px, the spike included.
+     */
+    @Test
+    void decimationKeepsDetailColumnByColumn(FxRobot robot) {
+        int[][][] both = drawBothWays(robot, curve(200_000, 1.0, 3, Color.rgb(230, 20, 20)));
+        int[][] a = both[0];
+        int[][] b = both[1];
+        int[] range = columns();
+        int compared = 0;
+        for (int x = range[0]; x <= range[1]; x++) {
+            if (a[x][0] < 0 && b[x][0] < 0) {
+                continue;
+            }
+            compared++;
+            // agreement up to one pixel of horizontal position and two of vertical
+            assertTrue(inside(a[x], window(b, x), 2), "column " + x + " draws what the full drawing lacks");
+            assertTrue(inside(b[x], window(a, x), 2), "column " + x + " loses what the full drawing shows");
+        }
+        assertTrue(compared > WIDTH / 2, "the curve spans the plot");
+        int spikeColumn = (int) Math.floor(plot.xOf(Math.pow(10, 6.3)));
+        int tallest = Integer.MAX_VALUE;
+        for (int x = spikeColumn - 1; x <= spikeColumn + 1; x++) {
+            tallest = Math.min(tallest, a[x][0]);
+        }
+        assertTrue(tallest < a[spikeColumn - 10][0] - 30, "the sub-pixel spike survives decimation");
+    }
+
+    /**
+     * A curve rising ~20 px per column: the decimated drawing never puts ink outside the full drawing (whose
+     * anti-aliased diagonal is wider than the data by half a column's rise on each side).
+     */
+    @Test
+    void decimationInventsNothingOnSteepCurves(FxRobot robot) {
+        int[][][] both = drawBothWays(robot, curve(200_000, 1.0, 40, Color.rgb(230, 20, 20)));
+        int[][] a = both[0];
+        int[][] b = both[1];
+        int[] range = columns();
+        for (int x = range[0]; x <= range[1]; x++) {
+            if (a[x][0] < 0) {
+                continue;
+            }
+            assertTrue(inside(a[x], window(b, x), 1),
+                    "column " + x + ": decimated " + a[x][0] + ".." + a[x][1] + ", full " + b[x][0] + ".." + b[x][1]);
+        }
+    }
+
+    @Test
+    void frequencyAxisIsLogarithmic(FxRobot robot) {
+        robot.interact(() -> plot.setFrequencyRange(1e3, 1e9));
+        WaitForAsyncUtils.waitForFxEvents();
+        double left = plot.xOf(1e3);
+        double right = plot.xOf(1e9);
+        assertEquals((left + right) / 2, plot.xOf(1e6), 1e-9);
+        assertEquals(1e6, plot.frequencyAt((left + right) / 2), 1e-3);
+    }
+
+    @Test
+    void snapshotAtTwiceTheScale(FxRobot robot) {
+        robot.interact(() -> plot.setSeries(List.of(curve(500, 1.0, 3, Color.BLUE))));
+        WritableImage[] image = new WritableImage[1];
+        robot.interact(() -> image[0] = plot.snapshot(2));
+        assertEquals(2 * plot.getWidth(), image[0].getWidth(), 1);
+    }
+}
