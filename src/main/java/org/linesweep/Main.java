@@ -4,8 +4,8 @@ import org.linesweep.cli.LineSweepCommand;
 
 /**
  * Entry point of the runnable jar: with no arguments it opens the explorer window on the default design,
- * otherwise it runs the command line. It does not extend JavaFX's Application, so the jar starts from the
- * class path.
+ * with {@code explore DESIGN.json} on that design, otherwise it runs the command line. It does not extend
+ * JavaFX's Application, so the jar starts from the class path.
  */
 public final class Main {
 
@@ -13,7 +13,7 @@ public final class Main {
     }
 
     public static void main(String[] args) {
-        if (args.length == 0) {
+        if (args.length == 0 || "explore".equals(args[0])) {
             org.linesweep.app.ExplorerLauncher.launch(args);
             return;
         }

@@ -25,7 +25,20 @@ public final class ExplorerApplication extends Application {
             thread.setDaemon(true);
             return thread;
         });
-        ExplorerModel model = new ExplorerModel(Presets.load(Presets.DEFAULT), worker, Platform::runLater);
+        java.util.List<String> raw = getParameters().getRaw();
+        org.linesweep.design.Design initial = Presets.load(Presets.DEFAULT);
+        String problem = null;
+        if (raw.size() >= 2 && "explore".equals(raw.get(0))) {
+            try {
+                initial = org.linesweep.io.DesignFiles.read(Path.of(raw.get(1)));
+            } catch (org.linesweep.design.InvalidInputException e) {
+                problem = "Could not open " + raw.get(1) + ": " + e.getMessage() + ". Showing the default design.";
+            }
+        }
+        ExplorerModel model = new ExplorerModel(initial, worker, Platform::runLater);
+        if (problem != null) {
+            model.report(problem);
+        }
         ExplorerWindow window = new ExplorerWindow(model, new ChooserDialogs(stage),
                 Preferences.userNodeForPackage(ExplorerApplication.class));
         stage.setScene(new Scene(window.root(), 1440, 900));

@@ -86,6 +86,7 @@ public final class ExplorerWindow {
         readout = new ReadoutPane(model);
         compare = new ComparePane(model);
         VBox left = new VBox(crossSection, designPanel);
+        left.setAlignment(javafx.geometry.Pos.TOP_CENTER);
         designScroll = new ScrollPane(left);
         designScroll.setFitToWidth(true);
         designScroll.setPrefWidth(330);
@@ -176,9 +177,10 @@ public final class ExplorerWindow {
         } else {
             root.getStyleClass().remove("meeting");
         }
-        designPanel.secondaryControls().setVisible(!meeting);
-        designPanel.secondaryControls().setManaged(!meeting);
+        designPanel.setCompact(meeting);
+        designScroll.setPrefWidth(meeting ? 430 : 330);
         if (stage != null) {
+            stage.setFullScreenExitHint("F5 leaves meeting mode");
             stage.setFullScreen(meeting);
         }
     }

@@ -24,7 +24,7 @@ public final class ComparePane extends VBox {
 
     private final ExplorerModel model;
     private final TableView<Pin> table = new TableView<>();
-    private final Button pin = new Button("Pin current design");
+    private final Button pin = new Button("Pin");
     private final Button unpin = new Button("Unpin");
     private final Button clear = new Button("Clear pins");
     private Palette palette = Palette.STANDARD;
@@ -94,7 +94,11 @@ public final class ComparePane extends VBox {
         });
         table.getColumns().add(ceiling);
         table.getColumns().add(ceilingChange);
-        HBox buttons = new HBox(6, pin, unpin, clear, new Label("differences are pin − live, at the read-out frequency"));
+        pin.setTooltip(new javafx.scene.control.Tooltip("Pin the current design for comparison (Ctrl+P)"));
+        table.setTooltip(new javafx.scene.control.Tooltip("Values at the read-out frequency; differences are pin − live"));
+        Label note = new Label("Δ = pin − live, at the read-out frequency");
+        note.getStyleClass().add("compare-note");
+        HBox buttons = new HBox(6, pin, unpin, clear, note);
         getChildren().addAll(buttons, table);
         model.snapshotProperty().addListener((o, old, now) -> table.refresh());
         model.crosshairHzProperty().addListener((o, old, now) -> table.refresh());

@@ -22,6 +22,11 @@ public final class CrossSectionView extends Region {
         getStyleClass().add("cross-section");
     }
 
+    @Override
+    protected void layoutChildren() {
+        canvas.relocate(Math.max(0, (getWidth() - canvas.getWidth()) / 2), 0);
+    }
+
     public void show(Geometry newGeometry) {
         geometry = newGeometry;
         draw();
@@ -51,19 +56,22 @@ public final class CrossSectionView extends Region {
                 disc(g, cx, cy, Math.max(a * s, 0.5), METAL);
             }
             case TWO_WIRE -> {
+                // the model's medium fills all space
+                g.setFill(DIELECTRIC);
+                g.fillRect(0, 0, w, h);
                 double a = geometry.value("wireDiameter") / 2;
                 double d = geometry.value("spacing");
-                double s = Math.min((w - 12) / (d + 2 * a), (h - 12) / (2 * a));
-                g.setFill(DIELECTRIC);
-                g.fillRoundRect(cx - (d / 2 + 2 * a) * s, cy - 2 * a * s, (d + 4 * a) * s, 4 * a * s, 8, 8);
+                double s = Math.min((w - 40) / (d + 2 * a), (h - 40) / (2 * a));
                 disc(g, cx - d / 2 * s, cy, Math.max(a * s, 0.5), METAL);
                 disc(g, cx + d / 2 * s, cy, Math.max(a * s, 0.5), METAL);
             }
             case WIRE_OVER_GROUND -> {
+                g.setFill(DIELECTRIC);
+                g.fillRect(0, 0, w, h);
                 double a = geometry.value("wireDiameter") / 2;
                 double height = geometry.value("height");
-                double s = (h - 24) / (height + a);
-                double ground = h - 12;
+                double ground = h - 14;
+                double s = Math.min((ground - 20) / (height + a), (w - 40) / (2 * a));
                 g.setFill(METAL);
                 g.fillRect(8, ground, w - 16, 6);
                 disc(g, cx, ground - height * s, Math.max(a * s, 0.5), METAL);

@@ -180,6 +180,18 @@ public final class DesignPanel extends VBox {
         return secondary;
     }
 
+    /**
+     * Meeting mode: keep what a meeting decides on (geometry, length, materials, threshold) and hide the
+     * material details and the sweep.
+     */
+    public void setCompact(boolean compact) {
+        for (javafx.scene.Node node : List.of(secondary, conductivity, conductorPermeability, roughness, temperature,
+                permittivity, lossTangent, dielectricModel, lossBudget)) {
+            node.setVisible(!compact);
+            node.setManaged(!compact);
+        }
+    }
+
     /** The control of a geometry field, by its design-file name (for tests). */
     public QuantityControl geometryControl(String field) {
         return geometryControls.get(field);

@@ -22,7 +22,7 @@ public final class Display {
         if (metres >= 1) {
             return number(metres) + " m";
         }
-        return metres >= 1e-3 ? number(metres * 1e3) + " mm" : number(metres * 1e6) + " um";
+        return metres >= 0.1e-3 ? number(metres * 1e3) + " mm" : number(metres * 1e6) + " µm";
     }
 
     /** A line length: m (metric), ft or in (imperial). */

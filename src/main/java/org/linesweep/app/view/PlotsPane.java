@@ -297,7 +297,7 @@ public final class PlotsPane extends GridPane {
             impedance.setLeftAxis("|Z0| Ω", FrequencyPlot.Scale.LOG);
             impedance.setRightAxis("phase °", FrequencyPlot.Scale.LINEAR);
         }
-        impedance.setTitle("Characteristic impedance");
+        impedance.setTitle("Impedance Z0");
         impedance.setSeries(series);
     }
 

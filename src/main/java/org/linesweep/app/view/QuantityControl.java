@@ -64,7 +64,7 @@ public final class QuantityControl extends VBox {
         Label name = new Label(label);
         name.getStyleClass().add("quantity-label");
         text.setId(field.replace('.', '-'));
-        text.setPrefColumnCount(9);
+        text.setPrefColumnCount(7);
         text.setTooltip(new Tooltip(rule.allowed() + ". Accepts units, e.g. " + rule.kind().example() + "."));
         text.setOnAction(e -> commitText());
         text.focusedProperty().addListener((o, was, is) -> {
