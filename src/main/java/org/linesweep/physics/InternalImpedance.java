@@ -122,6 +122,18 @@ public final class InternalImpedance {
         return xCothX(x).multiply(roughness / (sigma * thicknessMetres));
     }
 
+    /**
+     * R_ac/R_dc of a flat conductor of thickness t carrying current on one face: Re Z_s(t)·σt, including
+     * roughness. NaN for a perfect conductor.
+     */
+    public static double flatResistanceRatio(Conductor conductor, double thicknessMetres, double frequencyHz) {
+        if (conductor.isPerfect()) {
+            return Double.NaN;
+        }
+        return flatSurface(conductor, thicknessMetres, frequencyHz).getReal()
+                * conductor.conductivitySiemensPerMetre() * thicknessMetres;
+    }
+
     /** x·coth(x) for Re x ≥ 0, accurate both for small |x| (series) and large |x| (no overflow). */
     static Complex xCothX(Complex x) {
         if (x.abs() < 0.01) {

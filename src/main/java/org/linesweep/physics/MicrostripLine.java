@@ -110,11 +110,7 @@ public final class MicrostripLine extends LineModel {
 
     @Override
     public double characteristicResistanceRatio(double frequencyHz) {
-        if (conductor.isPerfect()) {
-            return Double.NaN;
-        }
-        return InternalImpedance.flatSurface(conductor, thicknessMetres, frequencyHz).getReal()
-                * conductor.conductivitySiemensPerMetre() * thicknessMetres;
+        return InternalImpedance.flatResistanceRatio(conductor, thicknessMetres, frequencyHz);
     }
 
     /**

@@ -49,11 +49,7 @@ public final class ParallelPlateLine extends HomogeneousTemLine {
 
     @Override
     public double characteristicResistanceRatio(double frequencyHz) {
-        if (conductor.isPerfect()) {
-            return Double.NaN;
-        }
-        return InternalImpedance.flatSurface(conductor, thicknessMetres, frequencyHz).getReal()
-                * conductor.conductivitySiemensPerMetre() * thicknessMetres;
+        return InternalImpedance.flatResistanceRatio(conductor, thicknessMetres, frequencyHz);
     }
 
     @Override

@@ -72,12 +72,8 @@ public final class StriplineLine extends HomogeneousTemLine {
 
     @Override
     public double characteristicResistanceRatio(double frequencyHz) {
-        if (conductor.isPerfect()) {
-            return Double.NaN;
-        }
-        double half = thicknessMetres / 2;
-        return InternalImpedance.flatSurface(conductor, half, frequencyHz).getReal()
-                * conductor.conductivitySiemensPerMetre() * half;
+        // each face of the strip sees half its thickness
+        return InternalImpedance.flatResistanceRatio(conductor, thicknessMetres / 2, frequencyHz);
     }
 
     @Override

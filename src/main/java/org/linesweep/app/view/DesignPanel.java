@@ -201,6 +201,16 @@ public final class DesignPanel extends VBox {
         return lineLength;
     }
 
+    /** Any control by its field path (e.g. {@code dielectric.permittivity}), for tests; null if none. */
+    public QuantityControl control(String fieldPath) {
+        for (QuantityControl c : allControls()) {
+            if (c.textField().getId().equals(fieldPath.replace('.', '-'))) {
+                return c;
+            }
+        }
+        return null;
+    }
+
     private List<QuantityControl> allControls() {
         List<QuantityControl> all = new ArrayList<>(geometryControls.values());
         all.addAll(List.of(conductivity, conductorPermeability, roughness, temperature, permittivity, lossTangent,
