@@ -36,6 +36,11 @@ public final class CoaxLine extends HomogeneousTemLine {
     }
 
     @Override
+    protected String geometryText() {
+        return "a=" + innerRadiusMetres + " b=" + outerRadiusMetres + " wall=" + outerWallMetres;
+    }
+
+    @Override
     public LineType type() {
         return LineType.COAX;
     }
@@ -46,10 +51,11 @@ public final class CoaxLine extends HomogeneousTemLine {
     }
 
     @Override
-    public Complex conductorImpedance(double frequencyHz) {
-        return InternalImpedance.roundWire(conductor, innerRadiusMetres, frequencyHz)
-                .add(InternalImpedance.tube(conductor, outerRadiusMetres, outerRadiusMetres + outerWallMetres,
-                        frequencyHz));
+    public Complex[] conductorImpedanceWithSlope(double frequencyHz) {
+        Complex[] inner = InternalImpedance.roundWireWithSlope(conductor, innerRadiusMetres, frequencyHz);
+        Complex[] outer = InternalImpedance.tubeWithSlope(conductor, outerRadiusMetres,
+                outerRadiusMetres + outerWallMetres, frequencyHz);
+        return new Complex[] {inner[0].add(outer[0]), inner[1].add(outer[1])};
     }
 
     @Override

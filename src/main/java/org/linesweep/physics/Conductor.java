@@ -57,6 +57,18 @@ public record Conductor(double conductivityAt20CSiemensPerMetre, double temperat
     }
 
     /**
+     * dK/dω of Hammerstad's roughness factor: with r² = (Δ/δ)² ∝ ω, dK/dω = (2/π)·1.4·(r²/ω)/(1 + (1.4 r²)²).
+     */
+    public double roughnessFactorSlope(double frequencyHz) {
+        if (roughnessRmsMetres <= 0 || isPerfect()) {
+            return 0.0;
+        }
+        double ratio = roughnessRmsMetres / skinDepthMetres(frequencyHz);
+        double u = 1.4 * ratio * ratio;
+        return (2.0 / Math.PI) * u / (2 * Math.PI * frequencyHz) / (1.0 + u * u);
+    }
+
+    /**
      * Hammerstad's roughness factor K = 1 + (2/π)·atan(1.4·(Δ/δ)²) (E. Hammerstad and Ø. Jensen,
      * "Accurate models for microstrip computer-aided design", IEEE MTT-S Digest 1980, a fit to
      * S. P. Morgan, J. Appl. Phys. 20, 1949). It tends to 1 at low frequency and saturates at 2.

@@ -110,6 +110,24 @@ public record Dielectric(double relativePermittivity, double lossTangent, double
             return slope * (Math.atan(omega / omega1) - Math.atan(omega / omega2)) / LN10;
         }
 
+        /** dε′/dω at the frequency, per rad/s: (K/ln 10)·[ω/(ω2² + ω²) − ω/(ω1² + ω²)]; 0 for the constant model. */
+        public double realSlope(double frequencyHz) {
+            if (!wideband) {
+                return 0.0;
+            }
+            double omega = 2 * Math.PI * frequencyHz;
+            return slope / LN10 * (omega / (omega2 * omega2 + omega * omega) - omega / (omega1 * omega1 + omega * omega));
+        }
+
+        /** dε″/dω at the frequency, per rad/s: (K/ln 10)·[ω1/(ω1² + ω²) − ω2/(ω2² + ω²)]; 0 for the constant model. */
+        public double imaginarySlope(double frequencyHz) {
+            if (!wideband) {
+                return 0.0;
+            }
+            double omega = 2 * Math.PI * frequencyHz;
+            return slope / LN10 * (omega1 / (omega1 * omega1 + omega * omega) - omega2 / (omega2 * omega2 + omega * omega));
+        }
+
         /** ε∞ of the wideband fit (the constant ε′ for the constant model). */
         public double epsilonInfinity() {
             return epsilonInfinity;

@@ -19,7 +19,12 @@ public abstract class HomogeneousTemLine extends LineModel {
     public abstract double capacitanceFactor();
 
     /** The internal impedance of all conductors per metre of line at f, Ω/m. */
-    public abstract Complex conductorImpedance(double frequencyHz);
+    public Complex conductorImpedance(double frequencyHz) {
+        return conductorImpedanceWithSlope(frequencyHz)[0];
+    }
+
+    /** The conductors' internal impedance per metre and its derivative with respect to ω: {Z, dZ/dω}. */
+    public abstract Complex[] conductorImpedanceWithSlope(double frequencyHz);
 
     @Override
     public void evaluate(double frequencyHz, LineParameters out) {
@@ -36,6 +41,31 @@ public abstract class HomogeneousTemLine extends LineModel {
                 (omega * eps0 * imaginaryPermittivity + permittivity.conductivity()) * factor,
                 eps0 * realPermittivity * factor,
                 realPermittivity);
+    }
+
+    /**
+     * Closed-form derivatives: C'_ω = ε0F·dε′/dω, G'_ω = ε0F·(ε″ + ω·dε″/dω), and from the internal impedance
+     * R'_ω = Re dZ/dω, L'_ω = Im(dZ/dω)/ω − Im Z/ω².
+     */
+    @Override
+    public void evaluateWithSlopes(double frequencyHz, LineParameters out) {
+        double omega = 2 * Math.PI * frequencyHz;
+        double factor = capacitanceFactor();
+        double eps0 = PhysicalConstants.VACUUM_PERMITTIVITY_FARAD_PER_METRE;
+        double realPermittivity = permittivity.real(frequencyHz);
+        double imaginaryPermittivity = permittivity.imaginary(frequencyHz);
+        Complex[] internal = conductorImpedanceWithSlope(frequencyHz);
+        double externalInductance = PhysicalConstants.VACUUM_PERMEABILITY_HENRY_PER_METRE
+                * dielectric.relativePermeability() / factor;
+        out.set(internal[0].getReal(),
+                externalInductance + internal[0].getImaginary() / omega,
+                (omega * eps0 * imaginaryPermittivity + permittivity.conductivity()) * factor,
+                eps0 * realPermittivity * factor,
+                realPermittivity);
+        out.setSlopes(internal[1].getReal(),
+                internal[1].getImaginary() / omega - internal[0].getImaginary() / (omega * omega),
+                eps0 * factor * (imaginaryPermittivity + omega * permittivity.imaginarySlope(frequencyHz)),
+                eps0 * factor * permittivity.realSlope(frequencyHz));
     }
 
     /** Lossless characteristic impedance η/F at f, Ω (ignoring conductor and dielectric loss). */

@@ -32,6 +32,44 @@ public final class InternalImpedance {
     }
 
     /**
+     * d(Z/R_dc)/d(a/δ) of the round wire: with z = (1 + j)a/δ and ρ = I0/I1, dF/dz = ρ + (z/2)(1 − ρ²)
+     * (from I0′ = I1 and I1′ = I0 − I1/z, A&amp;S 9.6.27), times dz/d(a/δ) = 1 + j.
+     *
+     * @return {Z/R_dc, d(Z/R_dc)/d(a/δ)}
+     */
+    public static Complex[] roundWireRatioWithSlope(double radiusOverSkinDepth) {
+        if (radiusOverSkinDepth == 0.0) {
+            return new Complex[] {Complex.ONE, Complex.ZERO};
+        }
+        Complex z = ONE_PLUS_J.multiply(radiusOverSkinDepth);
+        Complex rho = SpecialFunctions.besselIRatio(z);
+        Complex ratio = z.multiply(0.5).multiply(rho);
+        Complex slope = rho.add(z.multiply(0.5).multiply(Complex.ONE.subtract(rho.multiply(rho))))
+                .multiply(ONE_PLUS_J);
+        return new Complex[] {ratio, slope};
+    }
+
+    /**
+     * A conductor impedance Z(ω) = R_dc·K(ω)·F(x(ω)) with x ∝ sqrt(ω) and Hammerstad's K, and its derivative
+     * dZ/dω = R_dc·[K′·F + K·F′(x)·x/(2ω)].
+     *
+     * @param dcResistance R_dc (Ω/m or Ω per square)
+     * @param ratioAndSlope {F, dF/dx}
+     * @param x the argument of F (r/δ or t/δ)
+     * @return {Z, dZ/dω}
+     */
+    static Complex[] scaleWithSlope(Conductor conductor, double dcResistance, Complex[] ratioAndSlope, double x,
+            double frequencyHz) {
+        double omega = 2 * Math.PI * frequencyHz;
+        double roughness = conductor.roughnessFactor(frequencyHz);
+        double roughnessSlope = conductor.roughnessFactorSlope(frequencyHz);
+        Complex value = ratioAndSlope[0].multiply(dcResistance * roughness);
+        Complex slope = ratioAndSlope[0].multiply(roughnessSlope)
+                .add(ratioAndSlope[1].multiply(roughness * x / (2 * omega))).multiply(dcResistance);
+        return new Complex[] {value, slope};
+    }
+
+    /**
      * Internal impedance per metre of a solid round wire of the given radius, including Hammerstad's
      * roughness factor.
      *
@@ -72,6 +110,66 @@ public final class InternalImpedance {
         return tubeRatio(innerRadiusMetres / conductor.skinDepthMetres(frequencyHz),
                 outerRadiusMetres / innerRadiusMetres)
                 .multiply(dcResistance * conductor.roughnessFactor(frequencyHz));
+    }
+
+    /** The round wire's internal impedance per metre and its derivative with respect to ω. */
+    public static Complex[] roundWireWithSlope(Conductor conductor, double radiusMetres, double frequencyHz) {
+        if (conductor.isPerfect()) {
+            return new Complex[] {Complex.ZERO, Complex.ZERO};
+        }
+        double dcResistance = 1.0 / (conductor.conductivitySiemensPerMetre() * Math.PI * radiusMetres * radiusMetres);
+        double x = radiusMetres / conductor.skinDepthMetres(frequencyHz);
+        return scaleWithSlope(conductor, dcResistance, roundWireRatioWithSlope(x), x, frequencyHz);
+    }
+
+    /** The tube's internal impedance per metre and its derivative with respect to ω. */
+    public static Complex[] tubeWithSlope(Conductor conductor, double innerRadiusMetres, double outerRadiusMetres,
+            double frequencyHz) {
+        if (conductor.isPerfect()) {
+            return new Complex[] {Complex.ZERO, Complex.ZERO};
+        }
+        double sigma = conductor.conductivitySiemensPerMetre();
+        double dcResistance = 1.0 / (sigma * Math.PI
+                * (outerRadiusMetres - innerRadiusMetres) * (outerRadiusMetres + innerRadiusMetres));
+        double x = innerRadiusMetres / conductor.skinDepthMetres(frequencyHz);
+        return scaleWithSlope(conductor, dcResistance, tubeRatioWithSlope(x, outerRadiusMetres / innerRadiusMetres),
+                x, frequencyHz);
+    }
+
+    /**
+     * The tube's Z/R_dc and its derivative with respect to x = b/δ. With T = (z_b/2)(κ² − 1)·N/D, κ = c/b and
+     * z_c = κ·z_b, differentiating N and D with I0′ = I1, I1′ = I0 − I1/z, K0′ = −K1, K1′ = −K0 − K1/z
+     * (A&amp;S 9.6.27, 9.6.28) reuses the same four function values at each radius.
+     *
+     * @return {T, dT/dx}
+     */
+    public static Complex[] tubeRatioWithSlope(double innerRadiusOverSkinDepth, double outerOverInnerRadius) {
+        double kappa = outerOverInnerRadius;
+        Complex gb = ONE_PLUS_J.multiply(innerRadiusOverSkinDepth);
+        Complex gc = gb.multiply(kappa);
+        Complex[] ib = SpecialFunctions.scaledI(gb);
+        Complex[] kb = SpecialFunctions.scaledK(gb);
+        Complex[] ic = SpecialFunctions.scaledI(gc);
+        Complex[] kc = SpecialFunctions.scaledK(gc);
+        Complex decay = gb.subtract(gc).multiply(2.0).exp();
+        Complex numerator = decay.multiply(ib[0]).multiply(kc[1]).add(kb[0].multiply(ic[1]));
+        Complex denominator = ic[1].multiply(kb[1]).subtract(decay.multiply(ib[1]).multiply(kc[1]));
+        // derivatives of N and D with respect to z_b, scaled by the same e^(z_b − z_c) as N and D
+        Complex k0cPlus = kc[0].add(kc[1].divide(gc));
+        Complex i0cMinus = ic[0].subtract(ic[1].divide(gc));
+        Complex numeratorSlope = decay.multiply(ib[1].multiply(kc[1]).subtract(ib[0].multiply(k0cPlus).multiply(kappa)))
+                .add(kb[0].multiply(i0cMinus).multiply(kappa).subtract(kb[1].multiply(ic[1])));
+        Complex denominatorSlope = i0cMinus.multiply(kb[1]).multiply(kappa)
+                .subtract(ic[1].multiply(kb[0].add(kb[1].divide(gb))))
+                .add(decay.multiply(ib[1].multiply(k0cPlus).multiply(kappa)
+                        .subtract(ib[0].subtract(ib[1].divide(gb)).multiply(kc[1]))));
+        double areaFactor = (kappa - 1.0) * (kappa + 1.0);
+        Complex quotient = numerator.divide(denominator);
+        Complex ratio = gb.multiply(0.5 * areaFactor).multiply(quotient);
+        Complex quotientSlope = numeratorSlope.multiply(denominator).subtract(numerator.multiply(denominatorSlope))
+                .divide(denominator.multiply(denominator));
+        Complex slopeInZ = quotient.add(gb.multiply(quotientSlope)).multiply(0.5 * areaFactor);
+        return new Complex[] {ratio, slopeInZ.multiply(ONE_PLUS_J)};
     }
 
     /**
@@ -120,6 +218,42 @@ public final class InternalImpedance {
         Complex x = ONE_PLUS_J.multiply(thicknessMetres / delta);
         // Z_s·σt = (k t)·coth(k t) = x·coth(x)
         return xCothX(x).multiply(roughness / (sigma * thicknessMetres));
+    }
+
+    /**
+     * The flat conductor's surface impedance and its derivative with respect to ω; an infinite thickness gives
+     * the thick-conductor (1 + j)Rs.
+     */
+    public static Complex[] flatSurfaceWithSlope(Conductor conductor, double thicknessMetres, double frequencyHz) {
+        if (conductor.isPerfect()) {
+            return new Complex[] {Complex.ZERO, Complex.ZERO};
+        }
+        double sigma = conductor.conductivitySiemensPerMetre();
+        double delta = conductor.skinDepthMetres(frequencyHz);
+        if (Double.isInfinite(thicknessMetres)) {
+            // Z = (1 + j)/(σδ)·K: (1 + j)·x with x = 1/δ ∝ sqrt(ω), R_dc-like factor 1/σ
+            double x = 1.0 / delta;
+            return scaleWithSlope(conductor, 1.0 / sigma, new Complex[] {ONE_PLUS_J.multiply(x), ONE_PLUS_J}, x,
+                    frequencyHz);
+        }
+        double x = thicknessMetres / delta;
+        Complex argument = ONE_PLUS_J.multiply(x);
+        Complex value = xCothX(argument);
+        Complex slope = xCothXSlope(argument).multiply(ONE_PLUS_J);
+        return scaleWithSlope(conductor, 1.0 / (sigma * thicknessMetres), new Complex[] {value, slope}, x,
+                frequencyHz);
+    }
+
+    /** d(x·coth x)/dx = coth x − x·(coth² x − 1), with its series for small |x|. */
+    static Complex xCothXSlope(Complex x) {
+        if (x.abs() < 0.01) {
+            Complex square = x.multiply(x);
+            return x.multiply(2.0 / 3.0).subtract(x.multiply(square).multiply(4.0 / 45.0))
+                    .add(x.multiply(square).multiply(square).multiply(12.0 / 945.0));
+        }
+        Complex decay = x.multiply(-2.0).exp();
+        Complex coth = Complex.ONE.add(decay).divide(Complex.ONE.subtract(decay));
+        return coth.subtract(x.multiply(coth.multiply(coth).subtract(Complex.ONE)));
     }
 
     /**

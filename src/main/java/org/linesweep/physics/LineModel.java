@@ -13,8 +13,9 @@ import java.util.List;
 public abstract class LineModel {
 
     /**
-     * Relative frequency step of the central difference used for the group velocity dω/dβ. With
-     * h = 1e-5 the truncation error (∝ h²) and the rounding error (∝ 1e-16/h) are both near 1e-10.
+     * Relative frequency step of the central difference used for the derivatives of the parameters when a
+     * line type has no closed form for them. With h = 1e-5 the truncation error (∝ h²) and the rounding
+     * error (∝ 1e-16/h) are both near 1e-10.
      */
     static final double GROUP_VELOCITY_STEP = 1e-5;
 
@@ -40,6 +41,28 @@ public abstract class LineModel {
     public abstract void evaluate(double frequencyHz, LineParameters out);
 
     /**
+     * Computes the parameters and their derivatives with respect to ω at one frequency. This default takes a
+     * central difference of {@link #evaluate} with relative step {@link #GROUP_VELOCITY_STEP}; line types that
+     * know their derivatives in closed form override it.
+     */
+    public void evaluateWithSlopes(double frequencyHz, LineParameters out) {
+        double step = GROUP_VELOCITY_STEP * frequencyHz;
+        evaluate(frequencyHz + step, out);
+        double r = out.resistanceOhmPerMetre;
+        double l = out.inductanceHenryPerMetre;
+        double g = out.conductanceSiemensPerMetre;
+        double c = out.capacitanceFaradPerMetre;
+        evaluate(frequencyHz - step, out);
+        double span = 2 * Math.PI * 2 * step;
+        double dr = (r - out.resistanceOhmPerMetre) / span;
+        double dl = (l - out.inductanceHenryPerMetre) / span;
+        double dg = (g - out.conductanceSiemensPerMetre) / span;
+        double dc = (c - out.capacitanceFaradPerMetre) / span;
+        evaluate(frequencyHz, out);
+        out.setSlopes(dr, dl, dg, dc);
+    }
+
+    /**
      * Radius (round conductor) or half-thickness (flat conductor) of the conductor whose skin effect
      * characterises the line: the coax inner, one wire, one plate or the strip.
      */
@@ -58,6 +81,14 @@ public abstract class LineModel {
 
     /** Where this design lies outside a published formula's stated validity range, in words. */
     public abstract List<String> validityWarnings();
+
+    /** The geometry in words, for reports: each dimension with its name, in metres. */
+    protected abstract String geometryText();
+
+    @Override
+    public String toString() {
+        return type().key() + "[" + geometryText() + "; " + conductor + "; " + dielectric + "]";
+    }
 
     /** The conductor. */
     public Conductor conductor() {
@@ -84,30 +115,23 @@ public abstract class LineModel {
     }
 
     /**
-     * Group velocity dω/dβ at f, m/s: the local derivative of the model's β(ω), by a central difference of
-     * relative step {@link #GROUP_VELOCITY_STEP}.
+     * Everything the model says at one frequency, computed exactly as the sweep engine computes each point:
+     * the group velocity is dω/dβ of the model at f, from {@link #evaluateWithSlopes}.
      */
-    public double groupVelocity(double frequencyHz, LineParameters scratch, double[] solution) {
-        double step = GROUP_VELOCITY_STEP * frequencyHz;
-        double betaAbove = beta(frequencyHz + step, scratch, solution);
-        double betaBelow = beta(frequencyHz - step, scratch, solution);
-        return 2 * Math.PI * (2 * step) / (betaAbove - betaBelow);
-    }
-
-    /** Everything the model says at one frequency. */
     public LinePoint at(double frequencyHz) {
-        LineParameters scratch = new LineParameters();
+        LineParameters p = new LineParameters();
         double[] solution = new double[Telegrapher.SIZE];
-        double groupVelocity = groupVelocity(frequencyHz, scratch, solution);
-        evaluate(frequencyHz, scratch);
-        Telegrapher.solve(scratch.resistanceOhmPerMetre, scratch.inductanceHenryPerMetre,
-                scratch.conductanceSiemensPerMetre, scratch.capacitanceFaradPerMetre,
-                2 * Math.PI * frequencyHz, solution);
-        return new LinePoint(frequencyHz, scratch.resistanceOhmPerMetre, scratch.inductanceHenryPerMetre,
-                scratch.conductanceSiemensPerMetre, scratch.capacitanceFaradPerMetre,
+        evaluateWithSlopes(frequencyHz, p);
+        double omega = 2 * Math.PI * frequencyHz;
+        Telegrapher.solve(p.resistanceOhmPerMetre, p.inductanceHenryPerMetre, p.conductanceSiemensPerMetre,
+                p.capacitanceFaradPerMetre, omega, solution);
+        double groupVelocity = Telegrapher.groupVelocity(p.resistanceOhmPerMetre, p.inductanceHenryPerMetre,
+                p.conductanceSiemensPerMetre, p.capacitanceFaradPerMetre, p.resistanceSlope, p.inductanceSlope,
+                p.conductanceSlope, p.capacitanceSlope, omega, solution[Telegrapher.ALPHA], solution[Telegrapher.BETA]);
+        return new LinePoint(frequencyHz, p.resistanceOhmPerMetre, p.inductanceHenryPerMetre,
+                p.conductanceSiemensPerMetre, p.capacitanceFaradPerMetre,
                 solution[Telegrapher.Z0_RE], solution[Telegrapher.Z0_IM], solution[Telegrapher.ALPHA],
-                solution[Telegrapher.BETA], groupVelocity, scratch.effectivePermittivity,
-                skinDepthMetres(frequencyHz));
+                solution[Telegrapher.BETA], groupVelocity, p.effectivePermittivity, skinDepthMetres(frequencyHz));
     }
 
     /** Relative permeability of the dielectric times its ε′ at f: the square of the slowing factor. */

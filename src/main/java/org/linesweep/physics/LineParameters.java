@@ -15,6 +15,11 @@ public final class LineParameters {
     double capacitanceFaradPerMetre;
     /** Effective relative permittivity: ε′(f) on homogeneous lines, ε_eff(f) on microstrip. */
     double effectivePermittivity;
+    /** dR'/dω, dL'/dω, dG'/dω, dC'/dω (per rad/s), when asked for. */
+    double resistanceSlope;
+    double inductanceSlope;
+    double conductanceSlope;
+    double capacitanceSlope;
 
     public double resistanceOhmPerMetre() {
         return resistanceOhmPerMetre;
@@ -34,6 +39,33 @@ public final class LineParameters {
 
     public double effectivePermittivity() {
         return effectivePermittivity;
+    }
+
+    /** dR'/dω, Ω·s/m. */
+    public double resistanceSlope() {
+        return resistanceSlope;
+    }
+
+    /** dL'/dω, H·s/m. */
+    public double inductanceSlope() {
+        return inductanceSlope;
+    }
+
+    /** dG'/dω, S·s/m. */
+    public double conductanceSlope() {
+        return conductanceSlope;
+    }
+
+    /** dC'/dω, F·s/m. */
+    public double capacitanceSlope() {
+        return capacitanceSlope;
+    }
+
+    void setSlopes(double dr, double dl, double dg, double dc) {
+        this.resistanceSlope = dr;
+        this.inductanceSlope = dl;
+        this.conductanceSlope = dg;
+        this.capacitanceSlope = dc;
     }
 
     void set(double r, double l, double g, double c, double epsEff) {

@@ -58,6 +58,11 @@ public final class MicrostripLine extends LineModel {
     }
 
     @Override
+    protected String geometryText() {
+        return "w=" + widthMetres + " h=" + heightMetres + " t=" + thicknessMetres;
+    }
+
+    @Override
     public LineType type() {
         return LineType.MICROSTRIP;
     }

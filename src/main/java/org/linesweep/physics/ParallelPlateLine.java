@@ -28,6 +28,11 @@ public final class ParallelPlateLine extends HomogeneousTemLine {
     }
 
     @Override
+    protected String geometryText() {
+        return "w=" + widthMetres + " d=" + separationMetres + " t=" + thicknessMetres;
+    }
+
+    @Override
     public LineType type() {
         return LineType.PARALLEL_PLATE;
     }
@@ -38,8 +43,9 @@ public final class ParallelPlateLine extends HomogeneousTemLine {
     }
 
     @Override
-    public Complex conductorImpedance(double frequencyHz) {
-        return InternalImpedance.flatSurface(conductor, thicknessMetres, frequencyHz).multiply(2.0 / widthMetres);
+    public Complex[] conductorImpedanceWithSlope(double frequencyHz) {
+        Complex[] plate = InternalImpedance.flatSurfaceWithSlope(conductor, thicknessMetres, frequencyHz);
+        return new Complex[] {plate[0].multiply(2.0 / widthMetres), plate[1].multiply(2.0 / widthMetres)};
     }
 
     @Override

@@ -47,6 +47,11 @@ public final class StriplineLine extends HomogeneousTemLine {
     }
 
     @Override
+    protected String geometryText() {
+        return "w=" + widthMetres + " b=" + spacingMetres + " t=" + thicknessMetres;
+    }
+
+    @Override
     public LineType type() {
         return LineType.STRIPLINE;
     }
@@ -57,12 +62,14 @@ public final class StriplineLine extends HomogeneousTemLine {
     }
 
     @Override
-    public Complex conductorImpedance(double frequencyHz) {
-        Complex strip = InternalImpedance.flatSurface(conductor, thicknessMetres / 2, frequencyHz)
-                .multiply(stripDerivativeOhmPerMetre);
-        Complex ground = InternalImpedance.flatSurface(conductor, thicknessMetres, frequencyHz)
-                .multiply(groundDerivativeOhmPerMetre);
-        return strip.add(ground).divide(PhysicalConstants.FREE_SPACE_IMPEDANCE_OHM);
+    public Complex[] conductorImpedanceWithSlope(double frequencyHz) {
+        Complex[] strip = InternalImpedance.flatSurfaceWithSlope(conductor, thicknessMetres / 2, frequencyHz);
+        Complex[] ground = InternalImpedance.flatSurfaceWithSlope(conductor, thicknessMetres, frequencyHz);
+        double eta0 = PhysicalConstants.FREE_SPACE_IMPEDANCE_OHM;
+        double stripWeight = stripDerivativeOhmPerMetre / eta0;
+        double groundWeight = groundDerivativeOhmPerMetre / eta0;
+        return new Complex[] {strip[0].multiply(stripWeight).add(ground[0].multiply(groundWeight)),
+            strip[1].multiply(stripWeight).add(ground[1].multiply(groundWeight))};
     }
 
     @Override

@@ -26,6 +26,28 @@ public final class Telegrapher {
     }
 
     /**
+     * Group velocity dω/dβ from the parameters, their derivatives with respect to ω and the propagation
+     * constant: dγ/dω = (Z'_ω·Y' + Z'·Y'_ω)/(2γ) with Z'_ω = dR'/dω + j(L' + ω·dL'/dω) and
+     * Y'_ω = dG'/dω + j(C' + ω·dC'/dω); v_g = 1/Im(dγ/dω).
+     */
+    public static double groupVelocity(double r, double l, double g, double c, double dr, double dl, double dg,
+            double dc, double omega, double alpha, double beta) {
+        double zRe = r;
+        double zIm = omega * l;
+        double yRe = g;
+        double yIm = omega * c;
+        double zwRe = dr;
+        double zwIm = l + omega * dl;
+        double ywRe = dg;
+        double ywIm = c + omega * dc;
+        double numRe = zwRe * yRe - zwIm * yIm + zRe * ywRe - zIm * ywIm;
+        double numIm = zwRe * yIm + zwIm * yRe + zRe * ywIm + zIm * ywRe;
+        // (num)/(2γ): imaginary part of num·conj(γ)/(2|γ|²)
+        double imaginary = (numIm * alpha - numRe * beta) / (2 * (alpha * alpha + beta * beta));
+        return 1.0 / imaginary;
+    }
+
+    /**
      * Solves one point.
      *
      * @param out array of at least {@link #SIZE}; receives α, β, Re Z0, Im Z0

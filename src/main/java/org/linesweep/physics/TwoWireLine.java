@@ -33,6 +33,11 @@ public final class TwoWireLine extends HomogeneousTemLine {
     }
 
     @Override
+    protected String geometryText() {
+        return "a=" + wireRadiusMetres + " D=" + spacingMetres;
+    }
+
+    @Override
     public LineType type() {
         return LineType.TWO_WIRE;
     }
@@ -48,20 +53,30 @@ public final class TwoWireLine extends HomogeneousTemLine {
     }
 
     @Override
-    public Complex conductorImpedance(double frequencyHz) {
-        return wireImpedance(conductor, wireRadiusMetres, proximityFactor, frequencyHz).multiply(2.0);
+    public Complex[] conductorImpedanceWithSlope(double frequencyHz) {
+        Complex[] wire = wireImpedanceWithSlope(conductor, wireRadiusMetres, proximityFactor, frequencyHz);
+        return new Complex[] {wire[0].multiply(2.0), wire[1].multiply(2.0)};
     }
 
-    /** One wire's internal impedance with the blended proximity factor, Ω/m. */
-    static Complex wireImpedance(Conductor conductor, double radiusMetres, double proximityFactor, double frequencyHz) {
+    /**
+     * One wire's internal impedance with the blended proximity factor, and its derivative with respect to ω:
+     * G(x) = F(x)·[1 + s(x)(P − 1)] with s = 1 − 1/Re F, so G′ = F′·P_eff + F·(P − 1)·Re F′/(Re F)² while s &gt; 0.
+     */
+    static Complex[] wireImpedanceWithSlope(Conductor conductor, double radiusMetres, double proximityFactor,
+            double frequencyHz) {
         if (conductor.isPerfect()) {
-            return Complex.ZERO;
+            return new Complex[] {Complex.ZERO, Complex.ZERO};
         }
         double dcResistance = 1.0 / (conductor.conductivitySiemensPerMetre() * Math.PI * radiusMetres * radiusMetres);
-        Complex ratio = InternalImpedance.roundWireRatio(radiusMetres / conductor.skinDepthMetres(frequencyHz));
-        double multiplier = InternalImpedance.blendedProximity(ratio, proximityFactor)
-                * conductor.roughnessFactor(frequencyHz);
-        return ratio.multiply(dcResistance * multiplier);
+        double x = radiusMetres / conductor.skinDepthMetres(frequencyHz);
+        Complex[] ratio = InternalImpedance.roundWireRatioWithSlope(x);
+        double blended = InternalImpedance.blendedProximity(ratio[0], proximityFactor);
+        double realRatio = ratio[0].getReal();
+        double blendSlope = realRatio > 1.0
+                ? (proximityFactor - 1.0) * ratio[1].getReal() / (realRatio * realRatio) : 0.0;
+        Complex[] withProximity = {ratio[0].multiply(blended),
+            ratio[1].multiply(blended).add(ratio[0].multiply(blendSlope))};
+        return InternalImpedance.scaleWithSlope(conductor, dcResistance, withProximity, x, frequencyHz);
     }
 
     /** R_ac/R_dc of one wire including the blended proximity factor. */

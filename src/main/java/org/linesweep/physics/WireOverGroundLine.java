@@ -37,6 +37,11 @@ public final class WireOverGroundLine extends HomogeneousTemLine {
     }
 
     @Override
+    protected String geometryText() {
+        return "a=" + wireRadiusMetres + " h=" + heightMetres;
+    }
+
+    @Override
     public LineType type() {
         return LineType.WIRE_OVER_GROUND;
     }
@@ -47,11 +52,11 @@ public final class WireOverGroundLine extends HomogeneousTemLine {
     }
 
     @Override
-    public Complex conductorImpedance(double frequencyHz) {
-        Complex wire = TwoWireLine.wireImpedance(conductor, wireRadiusMetres, proximityFactor, frequencyHz);
-        Complex ground = InternalImpedance.flatSurface(conductor, Double.POSITIVE_INFINITY, frequencyHz)
-                .divide(2 * Math.PI * sourceHeightMetres);
-        return wire.add(ground);
+    public Complex[] conductorImpedanceWithSlope(double frequencyHz) {
+        Complex[] wire = TwoWireLine.wireImpedanceWithSlope(conductor, wireRadiusMetres, proximityFactor, frequencyHz);
+        Complex[] ground = InternalImpedance.flatSurfaceWithSlope(conductor, Double.POSITIVE_INFINITY, frequencyHz);
+        double share = 1.0 / (2 * Math.PI * sourceHeightMetres);
+        return new Complex[] {wire[0].add(ground[0].multiply(share)), wire[1].add(ground[1].multiply(share))};
     }
 
     @Override

@@ -34,12 +34,16 @@ public final class SweepEngine {
         reuse.prepare(count, lengthMetres);
         for (int i = 0; i < count; i++) {
             double f = frequenciesHz[i];
-            double groupVelocity = model.groupVelocity(f, scratch, solution);
-            model.evaluate(f, scratch);
+            model.evaluateWithSlopes(f, scratch);
             double r = scratch.resistanceOhmPerMetre();
             double g = scratch.conductanceSiemensPerMetre();
-            Telegrapher.solve(r, scratch.inductanceHenryPerMetre(), g, scratch.capacitanceFaradPerMetre(),
-                    2 * Math.PI * f, solution);
+            double omega = 2 * Math.PI * f;
+            Telegrapher.solve(r, scratch.inductanceHenryPerMetre(), g, scratch.capacitanceFaradPerMetre(), omega,
+                    solution);
+            double groupVelocity = Telegrapher.groupVelocity(r, scratch.inductanceHenryPerMetre(), g,
+                    scratch.capacitanceFaradPerMetre(), scratch.resistanceSlope(), scratch.inductanceSlope(),
+                    scratch.conductanceSlope(), scratch.capacitanceSlope(), omega, solution[Telegrapher.ALPHA],
+                    solution[Telegrapher.BETA]);
             double alpha = solution[Telegrapher.ALPHA];
             double z0Re = solution[Telegrapher.Z0_RE];
             double z0Im = solution[Telegrapher.Z0_IM];
