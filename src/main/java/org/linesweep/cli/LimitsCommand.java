@@ -3,7 +3,6 @@ package org.linesweep.cli;
 import com.fasterxml.jackson.databind.node.ObjectNode;
 import java.io.PrintWriter;
 import java.nio.charset.StandardCharsets;
-import java.nio.file.Path;
 import java.util.concurrent.Callable;
 import org.linesweep.design.Design;
 import org.linesweep.design.Rule;
@@ -36,7 +35,7 @@ final class LimitsCommand implements Callable<Integer> {
     String lossBudget;
 
     @Option(names = "--out", paramLabel = "FILE", description = "Write to FILE (atomically) instead of standard output.")
-    Path out;
+    String out;
 
     @Override
     public Integer call() {
@@ -52,7 +51,7 @@ final class LimitsCommand implements Callable<Integer> {
         FrequencyLimits limits = LimitFinder.find(design.toModel(), design.lengthMetres(), design.threshold(),
                 design.lossBudgetDb());
         ObjectNode json = toJson(limits);
-        Output.deliver(out, spec.commandLine().getOut(), stream -> stream.write(
+        Output.deliver(CommonOptions.path("--out", out), spec.commandLine().getOut(), stream -> stream.write(
                 (DesignFiles.mapper().writeValueAsString(json) + "\n").getBytes(StandardCharsets.UTF_8)));
         return ExitStatus.OK;
     }

@@ -1,7 +1,6 @@
 package org.linesweep.cli;
 
 import java.io.PrintWriter;
-import java.nio.file.Path;
 import java.util.List;
 import java.util.concurrent.Callable;
 import org.linesweep.design.Design;
@@ -50,7 +49,7 @@ final class SweepCommand implements Callable<Integer> {
     String format;
 
     @Option(names = "--out", paramLabel = "FILE", description = "Write to FILE (atomically) instead of standard output.")
-    Path out;
+    String out;
 
     @Override
     public Integer call() {
@@ -85,7 +84,7 @@ final class SweepCommand implements Callable<Integer> {
         }
         CommonOptions.printWarnings(design, err);
         SweepResult result = new SweepEngine().run(design.toModel(), frequencies, design.lengthMetres());
-        Output.deliver(out, spec.commandLine().getOut(), stream -> {
+        Output.deliver(CommonOptions.path("--out", out), spec.commandLine().getOut(), stream -> {
             if (format.equals("json")) {
                 SweepTable.writeJson(result, stream);
             } else {

@@ -119,7 +119,11 @@ public record Design(String name, String description, Geometry geometry, Conduct
      * range, in words: the line model's own warnings plus temperature and sweep checks.
      */
     public List<String> warnings() {
-        LineModel model = toModel();
+        return warnings(toModel());
+    }
+
+    /** {@link #warnings()} for this design's model, already built (it must be this design's). */
+    public List<String> warnings(LineModel model) {
         List<String> warnings = new ArrayList<>(model.validityWarnings());
         if (temperatureKelvin < WARN_TEMPERATURE_LOW_KELVIN || temperatureKelvin > WARN_TEMPERATURE_HIGH_KELVIN) {
             warnings.add(String.format(Locale.ROOT, "temperature: %.1f degC is outside -60..200 degC, where the"

@@ -145,6 +145,15 @@ public final class InternalImpedance {
      */
     public static Complex[] tubeRatioWithSlope(double innerRadiusOverSkinDepth, double outerOverInnerRadius) {
         double kappa = outerOverInnerRadius;
+        double wallOverSkinDepth = innerRadiusOverSkinDepth * (kappa - 1.0);
+        if (wallOverSkinDepth > THICK_WALL_SKIN_DEPTHS) {
+            return thickTubeRatioWithSlope(innerRadiusOverSkinDepth, kappa);
+        }
+        return fullTubeRatioWithSlope(innerRadiusOverSkinDepth, kappa);
+    }
+
+    /** The full tube formula and its slope, whatever the wall thickness. */
+    static Complex[] fullTubeRatioWithSlope(double innerRadiusOverSkinDepth, double kappa) {
         Complex gb = ONE_PLUS_J.multiply(innerRadiusOverSkinDepth);
         Complex gc = gb.multiply(kappa);
         Complex[] ib = SpecialFunctions.scaledI(gb);
@@ -173,12 +182,37 @@ public final class InternalImpedance {
     }
 
     /**
+     * Wall thickness, in skin depths, above which the tube's outer surface no longer matters: the coupling
+     * factor |e^(−2g·t)| = e^(−2t/δ) is then below e^(−40) ≈ 4e-18, under double precision.
+     */
+    static final double THICK_WALL_SKIN_DEPTHS = 20.0;
+
+    /**
+     * The tube once its wall is many skin depths thick: with e^(−2g·t) negligible, N/D = K0(z_b)/K1(z_b) = q
+     * exactly to double precision, so T = (z_b/2)(κ² − 1)·q and dq/dz = −1 + q² + q/z (from K0′ = −K1,
+     * K1′ = −K0 − K1/z).
+     */
+    static Complex[] thickTubeRatioWithSlope(double innerRadiusOverSkinDepth, double kappa) {
+        Complex gb = ONE_PLUS_J.multiply(innerRadiusOverSkinDepth);
+        Complex[] kb = SpecialFunctions.scaledK(gb);
+        Complex q = kb[0].divide(kb[1]);
+        double areaFactor = (kappa - 1.0) * (kappa + 1.0);
+        Complex ratio = gb.multiply(0.5 * areaFactor).multiply(q);
+        Complex qSlope = q.multiply(q).add(q.divide(gb)).subtract(1.0);
+        Complex slopeInZ = q.add(gb.multiply(qSlope)).multiply(0.5 * areaFactor);
+        return new Complex[] {ratio, slopeInZ.multiply(ONE_PLUS_J)};
+    }
+
+    /**
      * The tube's internal impedance divided by its DC resistance; depends on b/δ and c/b only.
      *
      * @param innerRadiusOverSkinDepth b/δ, &gt; 0
      * @param outerOverInnerRadius c/b, &gt; 1
      */
     public static Complex tubeRatio(double innerRadiusOverSkinDepth, double outerOverInnerRadius) {
+        if (innerRadiusOverSkinDepth * (outerOverInnerRadius - 1.0) > THICK_WALL_SKIN_DEPTHS) {
+            return thickTubeRatioWithSlope(innerRadiusOverSkinDepth, outerOverInnerRadius)[0];
+        }
         Complex gb = ONE_PLUS_J.multiply(innerRadiusOverSkinDepth);
         Complex gc = gb.multiply(outerOverInnerRadius);
         Complex[] ib = SpecialFunctions.scaledI(gb);

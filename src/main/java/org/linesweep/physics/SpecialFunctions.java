@@ -88,8 +88,10 @@ public final class SpecialFunctions {
             Complex[] plain = seriesI(z);
             return plain[0].divide(plain[1]);
         }
-        Complex[] scaled = asymptoticScaledI(z);
-        return scaled[0].divide(scaled[1]);
+        // the prefactor 1/sqrt(2πz) cancels in the ratio
+        double[] sums = new double[4];
+        hankelSums(z.getReal(), z.getImaginary(), true, sums);
+        return new Complex(sums[0], sums[1]).divide(new Complex(sums[2], sums[3]));
     }
 
     /** Ascending series for I0 and I1 (A&amp;S 9.6.10), unscaled. */
@@ -164,47 +166,79 @@ public final class SpecialFunctions {
     /** Hankel's expansion of e^(−z)·I_n(z), A&amp;S 9.7.1, for n = 0 and 1. */
     static Complex[] asymptoticScaledI(Complex z) {
         Complex prefactor = z.multiply(2.0 * Math.PI).sqrt().reciprocal();
-        return new Complex[] {
-            prefactor.multiply(hankelSum(z, 0.0, true)),
-            prefactor.multiply(hankelSum(z, 4.0, true))
-        };
+        double[] sums = new double[4];
+        hankelSums(z.getReal(), z.getImaginary(), true, sums);
+        return new Complex[] {prefactor.multiply(new Complex(sums[0], sums[1])),
+            prefactor.multiply(new Complex(sums[2], sums[3]))};
     }
 
     /** Hankel's expansion of e^(z)·K_n(z), A&amp;S 9.7.2, for n = 0 and 1. */
     static Complex[] asymptoticScaledK(Complex z) {
         Complex prefactor = z.multiply(2.0 / Math.PI).sqrt().reciprocal();
-        return new Complex[] {
-            prefactor.multiply(hankelSum(z, 0.0, false)),
-            prefactor.multiply(hankelSum(z, 4.0, false))
-        };
+        double[] sums = new double[4];
+        hankelSums(z.getReal(), z.getImaginary(), false, sums);
+        return new Complex[] {prefactor.multiply(new Complex(sums[0], sums[1])),
+            prefactor.multiply(new Complex(sums[2], sums[3]))};
     }
 
     /**
-     * Σ (±1)^k a_k(ν)/z^k with a_k = Π_{j≤k}(μ − (2j−1)²)/(k!·8^k), μ = 4ν², stopped at the smallest
-     * term (the series is asymptotic).
+     * Σ (±1)^k a_k(ν)/z^k for ν = 0 and 1 at once, a_k = Π_{j≤k}(4ν² − (2j−1)²)/(k!·8^k), each stopped at its
+     * smallest term (the series are asymptotic). Primitive arithmetic: this sits in the sweep's inner loop.
+     *
+     * @param out receives {Re S0, Im S0, Re S1, Im S1}
      */
-    private static Complex hankelSum(Complex z, double mu, boolean alternating) {
-        Complex inverse = z.reciprocal();
-        Complex power = Complex.ONE;
-        double coefficient = 1.0;
-        Complex sum = Complex.ONE;
-        double previousSize = Double.MAX_VALUE;
-        for (int k = 1; k < MAX_TERMS; k++) {
+    private static void hankelSums(double x, double y, boolean alternating, double[] out) {
+        double inverse = 1.0 / (x * x + y * y);
+        double invRe = x * inverse;
+        double invIm = -y * inverse;
+        double powerRe = 1.0;
+        double powerIm = 0.0;
+        double c0 = 1.0;
+        double c1 = 1.0;
+        double s0Re = 1.0;
+        double s0Im = 0.0;
+        double s1Re = 1.0;
+        double s1Im = 0.0;
+        double previous0 = Double.MAX_VALUE;
+        double previous1 = Double.MAX_VALUE;
+        boolean done0 = false;
+        boolean done1 = false;
+        for (int k = 1; k < MAX_TERMS && !(done0 && done1); k++) {
             double odd = 2.0 * k - 1.0;
-            coefficient *= (mu - odd * odd) / (8.0 * k);
-            power = power.multiply(inverse);
-            Complex term = power.multiply(alternating && (k % 2 == 1) ? -coefficient : coefficient);
-            double size = term.abs();
-            if (size >= previousSize || coefficient == 0.0) {
-                break;
+            double sign = alternating && (k % 2 == 1) ? -1.0 : 1.0;
+            double re = powerRe * invRe - powerIm * invIm;
+            powerIm = powerRe * invIm + powerIm * invRe;
+            powerRe = re;
+            double modulus = Math.sqrt(powerRe * powerRe + powerIm * powerIm);
+            if (!done0) {
+                c0 *= (0.0 - odd * odd) / (8.0 * k);
+                double size = Math.abs(c0) * modulus;
+                if (size >= previous0) {
+                    done0 = true;
+                } else {
+                    s0Re += sign * c0 * powerRe;
+                    s0Im += sign * c0 * powerIm;
+                    previous0 = size;
+                    done0 = size <= SERIES_TOLERANCE * Math.hypot(s0Re, s0Im);
+                }
             }
-            sum = sum.add(term);
-            previousSize = size;
-            if (size <= SERIES_TOLERANCE * sum.abs()) {
-                break;
+            if (!done1) {
+                c1 *= (4.0 - odd * odd) / (8.0 * k);
+                double size = Math.abs(c1) * modulus;
+                if (size >= previous1 || c1 == 0.0) {
+                    done1 = true;
+                } else {
+                    s1Re += sign * c1 * powerRe;
+                    s1Im += sign * c1 * powerIm;
+                    previous1 = size;
+                    done1 = size <= SERIES_TOLERANCE * Math.hypot(s1Re, s1Im);
+                }
             }
         }
-        return sum;
+        out[0] = s0Re;
+        out[1] = s0Im;
+        out[2] = s1Re;
+        out[3] = s1Im;
     }
 
     /**

@@ -54,6 +54,19 @@ class SlopesTest {
         }
     }
 
+    /** The thick-wall form and the full tube formula agree on both sides of the switch (wall = 20 δ). */
+    @ParameterizedTest
+    @ValueSource(doubles = {19.99, 20.01, 30})
+    void thickWallShortcutIsSeamless(double wallOverSkinDepth) {
+        for (double kappa : new double[] {1.05, 1.2, 2.0}) {
+            double x = wallOverSkinDepth / (kappa - 1);
+            Complex[] full = InternalImpedance.fullTubeRatioWithSlope(x, kappa);
+            Complex[] thick = InternalImpedance.thickTubeRatioWithSlope(x, kappa);
+            assertTrue(full[0].subtract(thick[0]).abs() <= 1e-13 * full[0].abs(), "value at " + x);
+            assertTrue(full[1].subtract(thick[1]).abs() <= 1e-12 * full[1].abs(), "slope at " + x);
+        }
+    }
+
     @ParameterizedTest
     @ValueSource(doubles = {1e-4, 0.005, 0.0071, 0.3, 3, 30})
     void flatSurfaceSlope(double x) {

@@ -207,6 +207,25 @@ public final class ExplorerModel {
         return true;
     }
 
+    /**
+     * Pins a design directly (restoring an autosave): its results are computed here, on the calling thread.
+     *
+     * @return false when four are pinned already
+     */
+    public boolean pinDesign(Design pinned) {
+        if (pins.size() >= MAX_PINS) {
+            return false;
+        }
+        int slot = 0;
+        while (slotTaken(slot)) {
+            slot++;
+        }
+        pinCounter++;
+        String name = pinned.name().isBlank() ? "design" : pinned.name();
+        pins.add(new Pin(slot, "Pin " + pinCounter + ": " + name, SweepSnapshot.compute(-1, pinned)));
+        return true;
+    }
+
     private boolean slotTaken(int slot) {
         return pins.stream().anyMatch(p -> p.slot() == slot);
     }

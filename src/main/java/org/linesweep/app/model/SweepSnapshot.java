@@ -31,6 +31,6 @@ public record SweepSnapshot(long sequence, Design design, LineModel model, Sweep
         FrequencyLimits limits = LimitFinder.find(model, design.lengthMetres(), design.threshold(),
                 design.lossBudgetDb());
         return new SweepSnapshot(sequence, design, model, sweep, limits, LossRegions.of(model),
-                List.copyOf(design.warnings()));
+                List.copyOf(design.warnings(model)));
     }
 }

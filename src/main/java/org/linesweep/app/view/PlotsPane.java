@@ -51,6 +51,9 @@ public final class PlotsPane extends GridPane {
     private final ChoiceBox<ImpedanceForm> impedanceForm = new ChoiceBox<>();
     private final ChoiceBox<PerUnitLength> perUnitChoice = new ChoiceBox<>();
     private Palette palette = Palette.STANDARD;
+    /** Frequencies of the last sweep drawn, shared by all its series (one array per sweep). */
+    private SweepResult framesOf;
+    private double[] sharedFrequencies;
 
     public PlotsPane(ExplorerModel model) {
         this.model = model;
@@ -228,8 +231,17 @@ public final class PlotsPane extends GridPane {
         return out;
     }
 
+    /** The frequency array of a sweep, built once per sweep and shared by its series. */
+    private double[] frequencies(SweepResult sweep) {
+        if (sweep != framesOf) {
+            framesOf = sweep;
+            sharedFrequencies = column(sweep, sweep::frequencyHz);
+        }
+        return sharedFrequencies;
+    }
+
     private PlotSeries live(String name, SweepResult sweep, double[] y, double[] dash, boolean right) {
-        return new PlotSeries(name, column(sweep, sweep::frequencyHz), y, sweep.size(), palette.live(),
+        return new PlotSeries(name, frequencies(sweep), y, sweep.size(), palette.live(),
                 right ? 1.6 : 2.0, dash, right);
     }
 

@@ -127,8 +127,9 @@ public final class QuantityControl extends VBox {
         shownValue = value;
         updating = true;
         try {
-            if (!text.isFocused() || !text.getText().equals(formatter.apply(value))) {
-                text.setText(formatter.apply(value));
+            String shown = formatter.apply(value);
+            if (!text.getText().equals(shown)) {
+                text.setText(shown);
             }
             if (slider != null) {
                 if (!slider.isValueChanging() && !(value >= sliderMin && value <= sliderMax && sliderMin > 0)) {
