@@ -126,8 +126,8 @@ public final class FrequencyPlot extends Region {
     /** Replaces the curves; the vertical axes rescale to them. */
     public void setSeries(List<PlotSeries> newSeries) {
         series = List.copyOf(newSeries);
-        double[] left = range(false, yScale);
-        double[] right = range(true, rightScale);
+        double[] left = stable(yRange, range(false, yScale), yScale);
+        double[] right = stable(rightRange, range(true, rightScale), rightScale);
         if (left[0] != yRange[0] || left[1] != yRange[1] || right[0] != rightRange[0] || right[1] != rightRange[1]) {
             yRange = left;
             rightRange = right;
@@ -278,6 +278,22 @@ public final class FrequencyPlot extends Region {
         double pad = span > 0 ? 0.06 * span : Math.max(Math.abs(max) * 0.05, 1e-12);
         double[] nice = niceRange(min - pad, max + pad);
         return nice;
+    }
+
+    /**
+     * Keeps the current axis range while the new data's range lies inside it and fills at least half of it
+     * (in log units for a log axis): during a drag the grid and labels then stay put instead of being
+     * redrawn on every step.
+     */
+    private static double[] stable(double[] current, double[] wanted, Scale scale) {
+        boolean log = scale == Scale.LOG;
+        double currentSpan = log ? Math.log10(current[1] / current[0]) : current[1] - current[0];
+        double wantedSpan = log ? Math.log10(wanted[1] / wanted[0]) : wanted[1] - wanted[0];
+        boolean inside = wanted[0] >= current[0] && wanted[1] <= current[1];
+        if (inside && wantedSpan >= 0.5 * currentSpan && !(log && current[0] <= 0)) {
+            return current;
+        }
+        return wanted;
     }
 
     private static double[] niceRange(double min, double max) {
@@ -468,8 +484,9 @@ public final class FrequencyPlot extends Region {
         g.setStroke(s.color());
         g.setLineWidth(s.width() * lineScale);
         g.setLineDashes(s.dash());
-        // round joins: a miter at a sharp turn would spike past the data
-        g.setLineJoin(javafx.scene.shape.StrokeLineJoin.ROUND);
+        // bevel joins: a miter at a sharp turn would spike past the data, and round joins cost the
+        // software rasteriser far more
+        g.setLineJoin(javafx.scene.shape.StrokeLineJoin.BEVEL);
         g.beginPath();
         boolean penDown = false;
         double[] xs = s.x();
