@@ -82,7 +82,7 @@ public final class Units {
         }
         Double factor = switch (kind) {
             case LENGTH -> length(unit);
-            case THICKNESS -> unit.equals("oz") ? OUNCE_COPPER_METRES : length(unit);
+            case THICKNESS -> unit.equals("oz") ? Double.valueOf(OUNCE_COPPER_METRES) : length(unit);
             case FREQUENCY -> frequency(field, text, unit);
             case TEMPERATURE -> unit.equals("K") || isCelsius(unit) ? 1.0 : null;
             case DECIBEL -> unit.equals("dB") ? 1.0 : null;

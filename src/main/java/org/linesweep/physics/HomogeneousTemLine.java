@@ -28,19 +28,8 @@ public abstract class HomogeneousTemLine extends LineModel {
 
     @Override
     public void evaluate(double frequencyHz, LineParameters out) {
-        double omega = 2 * Math.PI * frequencyHz;
-        double factor = capacitanceFactor();
-        double eps0 = PhysicalConstants.VACUUM_PERMITTIVITY_FARAD_PER_METRE;
-        double realPermittivity = permittivity.real(frequencyHz);
-        double imaginaryPermittivity = permittivity.imaginary(frequencyHz);
-        Complex internal = conductorImpedance(frequencyHz);
-        double externalInductance = PhysicalConstants.VACUUM_PERMEABILITY_HENRY_PER_METRE
-                * dielectric.relativePermeability() / factor;
-        out.set(internal.getReal(),
-                externalInductance + internal.getImaginary() / omega,
-                (omega * eps0 * imaginaryPermittivity + permittivity.conductivity()) * factor,
-                eps0 * realPermittivity * factor,
-                realPermittivity);
+        // the slopes cost a few multiplications beyond the values, so one code path serves both
+        evaluateWithSlopes(frequencyHz, out);
     }
 
     /**

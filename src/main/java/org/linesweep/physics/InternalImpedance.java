@@ -98,18 +98,11 @@ public final class InternalImpedance {
      */
     public static Complex tube(Conductor conductor, double innerRadiusMetres, double outerRadiusMetres,
             double frequencyHz) {
-        if (conductor.isPerfect()) {
-            return Complex.ZERO;
+        if (frequencyHz <= 0 && !conductor.isPerfect()) {
+            return new Complex(1.0 / (conductor.conductivitySiemensPerMetre() * Math.PI
+                    * (outerRadiusMetres - innerRadiusMetres) * (outerRadiusMetres + innerRadiusMetres)));
         }
-        double sigma = conductor.conductivitySiemensPerMetre();
-        double dcResistance = 1.0 / (sigma * Math.PI
-                * (outerRadiusMetres - innerRadiusMetres) * (outerRadiusMetres + innerRadiusMetres));
-        if (frequencyHz <= 0) {
-            return new Complex(dcResistance);
-        }
-        return tubeRatio(innerRadiusMetres / conductor.skinDepthMetres(frequencyHz),
-                outerRadiusMetres / innerRadiusMetres)
-                .multiply(dcResistance * conductor.roughnessFactor(frequencyHz));
+        return tubeWithSlope(conductor, innerRadiusMetres, outerRadiusMetres, frequencyHz)[0];
     }
 
     /** The round wire's internal impedance per metre and its derivative with respect to ω. */
@@ -210,21 +203,7 @@ public final class InternalImpedance {
      * @param outerOverInnerRadius c/b, &gt; 1
      */
     public static Complex tubeRatio(double innerRadiusOverSkinDepth, double outerOverInnerRadius) {
-        if (innerRadiusOverSkinDepth * (outerOverInnerRadius - 1.0) > THICK_WALL_SKIN_DEPTHS) {
-            return thickTubeRatioWithSlope(innerRadiusOverSkinDepth, outerOverInnerRadius)[0];
-        }
-        Complex gb = ONE_PLUS_J.multiply(innerRadiusOverSkinDepth);
-        Complex gc = gb.multiply(outerOverInnerRadius);
-        Complex[] ib = SpecialFunctions.scaledI(gb);
-        Complex[] kb = SpecialFunctions.scaledK(gb);
-        Complex[] ic = SpecialFunctions.scaledI(gc);
-        Complex[] kc = SpecialFunctions.scaledK(gc);
-        Complex decay = gb.subtract(gc).multiply(2.0).exp();
-        Complex numerator = decay.multiply(ib[0]).multiply(kc[1]).add(kb[0].multiply(ic[1]));
-        Complex denominator = ic[1].multiply(kb[1]).subtract(decay.multiply(ib[1]).multiply(kc[1]));
-        // Z/R_dc = (g b/2)·(c²/b² − 1)·numerator/denominator, from Z = (g/(2πbσ))·N/D and R_dc = 1/(σπ(c²−b²)).
-        double areaFactor = (outerOverInnerRadius - 1.0) * (outerOverInnerRadius + 1.0);
-        return gb.multiply(0.5 * areaFactor).multiply(numerator).divide(denominator);
+        return tubeRatioWithSlope(innerRadiusOverSkinDepth, outerOverInnerRadius)[0];
     }
 
     /**

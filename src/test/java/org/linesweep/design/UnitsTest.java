@@ -42,6 +42,15 @@ class UnitsTest {
         assertTrue(e.getMessage().startsWith("sweep.to"));
     }
 
+    /** Found by the fuzz test: an unknown prefix on a thickness once threw instead of refusing. */
+    @ParameterizedTest
+    @ValueSource(strings = {"2 xm", "1 Qm", "3 ozz", "1 oz oz", "5 Hz"})
+    void unknownThicknessUnitsAreRefused(String text) {
+        InvalidInputException e = assertThrows(InvalidInputException.class,
+                () -> Units.parse("line.thickness", text, UnitKind.THICKNESS));
+        assertTrue(e.getMessage().startsWith("line.thickness"), e.getMessage());
+    }
+
     @Test
     void temperatures() {
         assertEquals(293.15, Units.parse("t", "20 degC", UnitKind.TEMPERATURE), 1e-12);
