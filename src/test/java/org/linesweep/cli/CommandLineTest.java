@@ -139,6 +139,22 @@ class CommandLineTest {
     }
 
     @Test
+    void solvePrintsTheDimensionAndTheDesign() throws IOException {
+        Run r = run("solve", preset("board-trace-50-ohm"), "--for", "width", "--z0", "50", "--at", "1GHz");
+        assertEquals(0, r.status(), r.err());
+        JsonNode json = new ObjectMapper().readTree(r.out());
+        assertEquals("width", json.get("field").asText());
+        assertEquals(50.0, json.get("z0Ohm").asDouble(), 1e-8);
+        assertEquals(json.get("value").asDouble(), json.get("design").get("line").get("width").asDouble());
+        Run none = run("solve", preset("board-trace-50-ohm"), "--for", "width", "--z0", "1000");
+        assertEquals(ExitStatus.NO_SOLUTION, none.status(), none.err());
+        assertTrue(none.err().startsWith("no solution: "), none.err());
+        assertEquals(ExitStatus.INVALID_INPUT, run("solve", preset("board-trace-50-ohm"), "--for", "spacing", "--z0",
+                "50").status());
+        assertEquals(ExitStatus.INVALID_INPUT, run("solve", preset("board-trace-50-ohm"), "--for", "width").status());
+    }
+
+    @Test
     void materialsListsTheCatalogue() {
         Run r = run("materials");
         assertEquals(0, r.status());

@@ -319,10 +319,68 @@ public final class DesignPanel extends VBox {
             QuantityControl control = slider(field.label(), "line." + field.name(), field.rule(),
                     v -> Display.length(v, model.unitSystemProperty().get()),
                     (d, v) -> d.withGeometryValue(field.name(), v));
+            javafx.scene.control.Button solve = new javafx.scene.control.Button("solve…");
+            solve.setId("solve-" + field.name());
+            solve.getStyleClass().add("solve-button");
+            solve.setTooltip(new Tooltip("Find the " + field.label().toLowerCase()
+                    + " that gives a target |Z0|, all else held (Brent's method over its allowed range)"));
+            solve.setOnAction(e -> askAndSolve(field));
+            control.addAction(solve);
             geometryControls.put(field.name(), control);
             geometryBox.getChildren().add(control);
         }
         shownType = lineType;
+    }
+
+    /**
+     * Solves the field for a target |Z0| at a frequency and applies the result as one undoable change.
+     *
+     * @return true if a solution was found and applied; otherwise the model's message says why
+     */
+    public boolean solveFor(String field, double targetOhm, double frequencyHz) {
+        org.linesweep.design.Synthesis.Target target = new org.linesweep.design.Synthesis.Target(
+                org.linesweep.design.Synthesis.Quantity.Z0_MAGNITUDE, targetOhm, frequencyHz);
+        try {
+            org.linesweep.design.Synthesis.Solution solution =
+                    org.linesweep.design.Synthesis.solve(model.getDesign(), field, target);
+            return model.apply(d -> solution.design());
+        } catch (org.linesweep.design.Synthesis.NoSolutionException e) {
+            model.report("No solution: " + e.getMessage() + ".");
+            return false;
+        }
+    }
+
+    private void askAndSolve(GeometryField field) {
+        javafx.scene.control.Dialog<javafx.scene.control.ButtonType> dialog = new javafx.scene.control.Dialog<>();
+        dialog.setTitle("Solve for " + field.label().toLowerCase());
+        dialog.setHeaderText("Which " + field.label().toLowerCase() + " gives this |Z0|?");
+        javafx.scene.control.TextField ohms = new javafx.scene.control.TextField("50");
+        ohms.setId("solve-target-ohm");
+        javafx.scene.control.TextField at = new javafx.scene.control.TextField(
+                Display.frequency(org.linesweep.design.Synthesis.DEFAULT_FREQUENCY_HZ));
+        at.setId("solve-frequency");
+        javafx.scene.layout.GridPane grid = new javafx.scene.layout.GridPane();
+        grid.setHgap(8);
+        grid.setVgap(6);
+        grid.addRow(0, new Label("Target |Z0| (Ω)"), ohms);
+        grid.addRow(1, new Label("at frequency"), at);
+        dialog.getDialogPane().setContent(grid);
+        dialog.getDialogPane().getButtonTypes().addAll(javafx.scene.control.ButtonType.OK,
+                javafx.scene.control.ButtonType.CANCEL);
+        dialog.showAndWait().filter(b -> b == javafx.scene.control.ButtonType.OK).ifPresent(b -> {
+            try {
+                double target = Double.parseDouble(ohms.getText().strip());
+                double frequency = Rule.FREQUENCY.parse("solve frequency", at.getText());
+                if (!(target > 0) || !Double.isFinite(target)) {
+                    throw new NumberFormatException();
+                }
+                solveFor(field.name(), target, frequency);
+            } catch (NumberFormatException e) {
+                model.report("Target |Z0|: '" + ohms.getText() + "' is not a positive number of ohms.");
+            } catch (org.linesweep.design.InvalidInputException e) {
+                model.report(e.getMessage());
+            }
+        });
     }
 
     private void refreshFormats() {

@@ -122,6 +122,12 @@ public final class QuantityControl extends VBox {
         setPadding(new Insets(2, 0, 4, 0));
     }
 
+    /** Puts an action (a small button) beside the field. */
+    public void addAction(javafx.scene.Node action) {
+        GridPane row = (GridPane) getChildren().get(0);
+        row.add(action, 2, 0);
+    }
+
     /** Shows a value; re-centres the slider's range on it unless a drag is under way. */
     public void show(double value) {
         shownValue = value;

@@ -83,6 +83,20 @@ class DesignPanelTest {
     }
 
     @Test
+    void solveBesideTheFieldHitsTheTarget(FxRobot robot) {
+        robot.clickOn("#solve-width");
+        robot.doubleClickOn("#solve-target-ohm").eraseText(6).write("60");
+        robot.clickOn("OK");
+        WaitForAsyncUtils.waitForFxEvents();
+        double z0 = model.getDesign().toModel().at(1e9).z0MagnitudeOhm();
+        assertEquals(60.0, z0, 1e-7);
+        robot.interact(() -> { model.undo(); });
+        assertEquals(0.38e-3, model.getDesign().geometry().value("width"), 1e-15, "solving is one undo step");
+        assertFalse(panel.solveFor("width", 5000, 1e9), "impossible target");
+        assertTrue(model.messageProperty().get().startsWith("No solution"), model.messageProperty().get());
+    }
+
+    @Test
     void dielectricModelSwitches(FxRobot robot) {
         @SuppressWarnings("unchecked")
         ComboBox<DielectricModelKind> kind = robot.lookup("#dielectric-model").queryAs(ComboBox.class);
