@@ -69,6 +69,7 @@ public final class ExplorerWindow {
     private final PlotsPane plots;
     private final ReadoutPane readout;
     private final ComparePane compare;
+    private final org.linesweep.app.view.SensitivityPane sensitivity;
     private final CrossSectionView crossSection = new CrossSectionView();
     private final Label warnings = new Label();
     private final Label status = new Label();
@@ -85,6 +86,8 @@ public final class ExplorerWindow {
         plots = new PlotsPane(model);
         readout = new ReadoutPane(model);
         compare = new ComparePane(model);
+        sensitivity = new org.linesweep.app.view.SensitivityPane(model,
+                java.util.concurrent.ForkJoinPool.commonPool(), javafx.application.Platform::runLater);
         VBox left = new VBox(crossSection, designPanel);
         left.setAlignment(javafx.geometry.Pos.TOP_CENTER);
         designScroll = new ScrollPane(left);
@@ -103,7 +106,12 @@ public final class ExplorerWindow {
         ScrollPane readoutScroll = new ScrollPane(readout);
         readoutScroll.setFitToWidth(true);
         readoutScroll.setPrefWidth(330);
-        SplitPane bottom = new SplitPane(compare, readoutScroll);
+        javafx.scene.control.TabPane tools = new javafx.scene.control.TabPane(
+                new javafx.scene.control.Tab("Compare", compare),
+                new javafx.scene.control.Tab("Sensitivity", new ScrollPane(sensitivity)));
+        tools.setTabClosingPolicy(javafx.scene.control.TabPane.TabClosingPolicy.UNAVAILABLE);
+        tools.setId("tools-tabs");
+        SplitPane bottom = new SplitPane(tools, readoutScroll);
         bottom.setDividerPositions(0.62);
         bottom.setPrefHeight(230);
         SplitPane center = new SplitPane(plots, bottom);
@@ -150,6 +158,10 @@ public final class ExplorerWindow {
 
     public ComparePane compare() {
         return compare;
+    }
+
+    public org.linesweep.app.view.SensitivityPane sensitivity() {
+        return sensitivity;
     }
 
     public Label warningStrip() {

@@ -213,6 +213,18 @@ class ExplorerWindowTest {
     }
 
     @Test
+    void sensitivityRanksTheInputs(FxRobot robot) throws TimeoutException {
+        settle();
+        robot.clickOn("Sensitivity");
+        robot.clickOn("#sensitivity-analyse");
+        WaitForAsyncUtils.waitFor(20, TimeUnit.SECONDS, () -> !window.sensitivity().rows().isEmpty());
+        WaitForAsyncUtils.waitForFxEvents();
+        var rows = window.sensitivity().rows();
+        assertTrue(rows.get(0).input().name().startsWith("line."), "a dimension matters most for |Z0| of a coax");
+        assertEquals(rows.size(), window.sensitivity().table().getItems().size());
+    }
+
+    @Test
     void meetingModeAndUnits(FxRobot robot) throws TimeoutException {
         settle();
         robot.interact(() -> model.meetingModeProperty().set(true));
