@@ -14,7 +14,8 @@ import picocli.CommandLine.Spec;
 @Command(name = "linesweep", mixinStandardHelpOptions = true, version = "LineSweep 0.1.0",
         description = "Transmission-line sweeps against frequency: RLGC, attenuation, velocity, impedance and"
                 + " frequency limits.",
-        subcommands = {SweepCommand.class, LimitsCommand.class, SolveCommand.class, MaterialsCommand.class},
+        subcommands = {SweepCommand.class, LimitsCommand.class, SolveCommand.class, ToleranceCommand.class,
+            MaterialsCommand.class},
         exitCodeListHeading = "%nExit status:%n",
         exitCodeList = {"0:success", "1:internal error (please report it)", "2:invalid input",
             "3:no solution exists", "4:the output could not be written"})

@@ -155,6 +155,22 @@ class CommandLineTest {
     }
 
     @Test
+    void toleranceIsReproducibleAndReportsTheYield() throws IOException {
+        String[] args = {"tolerance", preset("board-trace-50-ohm"), "--vary", "width=±0.5mil", "--vary", "height=±10%",
+            "--vary", "permittivity=±0.1", "--samples", "500", "--seed", "3", "--spec-z0", "50±10"};
+        Run first = run(args);
+        assertEquals(0, first.status(), first.err());
+        assertEquals(first.out(), run(args).out(), "same seed, same answer");
+        JsonNode json = new ObjectMapper().readTree(first.out());
+        assertTrue(json.get("z0Ohm").get("p5").asDouble() < json.get("z0Ohm").get("p95").asDouble());
+        assertTrue(json.get("yield").asDouble() > 0.9);
+        assertEquals(ExitStatus.INVALID_INPUT, run("tolerance", preset("board-trace-50-ohm"), "--vary", "spacing=±1%")
+                .status());
+        assertEquals(ExitStatus.INVALID_INPUT, run("tolerance", preset("board-trace-50-ohm"), "--vary", "width=±x%")
+                .status());
+    }
+
+    @Test
     void materialsListsTheCatalogue() {
         Run r = run("materials");
         assertEquals(0, r.status());

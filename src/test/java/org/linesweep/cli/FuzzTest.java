@@ -113,7 +113,8 @@ class FuzzTest {
     @Provide
     Arbitrary<List<String>> mutatedCommandLines() {
         Arbitrary<String> word = Arbitraries.oneOf(
-                Arbitraries.of("sweep", "limits", "materials", "--from", "--to", "--points", "--scale", "--at",
+                Arbitraries.of("sweep", "limits", "materials", "solve", "tolerance", "--for", "width", "--z0", "--vary",
+                        "width=±1%", "height=±0.01mm", "--samples", "20", "--seed", "--spec-z0", "50±10", "--from", "--to", "--points", "--scale", "--at",
                         "--format", "--out", "--threshold", "--loss-budget-db", "--debug", "--help", "-h", "log", "lin",
                         "csv", "json", "presets/bench-patch-lead.json", "presets/board-trace-50-ohm.json",
                         "presets/none.json", "1GHz", "2.4ghz", "5mhz", "0", "-1", "1e999", "NaN", "100000", "100001",
