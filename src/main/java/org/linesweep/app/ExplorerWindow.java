@@ -70,6 +70,7 @@ public final class ExplorerWindow {
     private final ReadoutPane readout;
     private final ComparePane compare;
     private final org.linesweep.app.view.SensitivityPane sensitivity;
+    private final org.linesweep.app.view.TolerancePane tolerance;
     private final CrossSectionView crossSection = new CrossSectionView();
     private final Label warnings = new Label();
     private final Label status = new Label();
@@ -87,6 +88,8 @@ public final class ExplorerWindow {
         readout = new ReadoutPane(model);
         compare = new ComparePane(model);
         sensitivity = new org.linesweep.app.view.SensitivityPane(model,
+                java.util.concurrent.ForkJoinPool.commonPool(), javafx.application.Platform::runLater);
+        tolerance = new org.linesweep.app.view.TolerancePane(model, plots,
                 java.util.concurrent.ForkJoinPool.commonPool(), javafx.application.Platform::runLater);
         VBox left = new VBox(crossSection, designPanel);
         left.setAlignment(javafx.geometry.Pos.TOP_CENTER);
@@ -108,7 +111,8 @@ public final class ExplorerWindow {
         readoutScroll.setPrefWidth(330);
         javafx.scene.control.TabPane tools = new javafx.scene.control.TabPane(
                 new javafx.scene.control.Tab("Compare", compare),
-                new javafx.scene.control.Tab("Sensitivity", new ScrollPane(sensitivity)));
+                new javafx.scene.control.Tab("Sensitivity", new ScrollPane(sensitivity)),
+                new javafx.scene.control.Tab("Tolerances", tolerance));
         tools.setTabClosingPolicy(javafx.scene.control.TabPane.TabClosingPolicy.UNAVAILABLE);
         tools.setId("tools-tabs");
         SplitPane bottom = new SplitPane(tools, readoutScroll);
@@ -158,6 +162,10 @@ public final class ExplorerWindow {
 
     public ComparePane compare() {
         return compare;
+    }
+
+    public org.linesweep.app.view.TolerancePane tolerance() {
+        return tolerance;
     }
 
     public org.linesweep.app.view.SensitivityPane sensitivity() {

@@ -9,11 +9,8 @@ import java.util.concurrent.Callable;
 import org.linesweep.design.Design;
 import org.linesweep.design.InvalidInputException;
 import org.linesweep.design.Rule;
-import org.linesweep.design.Sensitivity;
 import org.linesweep.design.Synthesis;
 import org.linesweep.design.Tolerance;
-import org.linesweep.design.UnitKind;
-import org.linesweep.design.Units;
 import org.linesweep.io.DesignFiles;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Mixin;
@@ -72,7 +69,7 @@ final class ToleranceCommand implements Callable<Integer> {
         double frequency = at == null ? Synthesis.DEFAULT_FREQUENCY_HZ : Rule.FREQUENCY.parse("--at", at);
         List<Tolerance.Variation> variations = new ArrayList<>();
         for (String item : vary) {
-            variations.add(variation(design, item));
+            variations.add(Tolerance.parseVariation(design, item));
         }
         double target = Double.NaN;
         double fraction = Double.NaN;
@@ -113,32 +110,6 @@ final class ToleranceCommand implements Callable<Integer> {
         node.put("p95", band.p95());
         node.put("rssP5", band.rssP5());
         node.put("rssP95", band.rssP95());
-    }
-
-    /** FIELD=±X[%]: X in the input's own unit (a length, K, or a plain number) or in per cent. */
-    static Tolerance.Variation variation(Design design, String item) {
-        int equals = item.indexOf('=');
-        if (equals < 1) {
-            throw new InvalidInputException("--vary", item, "expected FIELD=±X or FIELD=±X%, e.g. width=±0.5mil");
-        }
-        Sensitivity.Input input = org.linesweep.design.Tolerance.input(design, item.substring(0, equals).strip());
-        String amount = item.substring(equals + 1).strip().replace("+-", "±");
-        if (amount.startsWith("±")) {
-            amount = amount.substring(1).strip();
-        }
-        if (amount.endsWith("%")) {
-            double percent = parseRange("--vary", amount.substring(0, amount.length() - 1), 0, 100);
-            return new Tolerance.Variation(input, percent / 100, true);
-        }
-        UnitKind kind = input.name().startsWith("line.") || input.name().equals("length")
-                || input.name().endsWith("roughnessRms") ? UnitKind.LENGTH
-                : UnitKind.NUMBER;
-        double value = input.name().endsWith("conductivity") ? Units.parse("--vary", amount, UnitKind.CONDUCTIVITY)
-                : Units.parse("--vary", amount, kind);
-        if (!(value >= 0)) {
-            throw new InvalidInputException("--vary", item, "the tolerance must not be negative");
-        }
-        return new Tolerance.Variation(input, value, false);
     }
 
     private static double parseRange(String option, String text, double low, double high) {

@@ -51,6 +51,44 @@ public final class Tolerance {
     private Tolerance() {
     }
 
+    /** FIELD=±X[%]: X in the input's own unit (a length, K, or a plain number) or in per cent. */
+    public static Variation parseVariation(Design design, String item) {
+        int equals = item.indexOf('=');
+        if (equals < 1) {
+            throw new InvalidInputException("--vary", item, "expected FIELD=±X or FIELD=±X%, e.g. width=±0.5mil");
+        }
+        Sensitivity.Input input = input(design, item.substring(0, equals).strip());
+        String amount = item.substring(equals + 1).strip().replace("+-", "±");
+        if (amount.startsWith("±")) {
+            amount = amount.substring(1).strip();
+        }
+        if (amount.endsWith("%")) {
+            double percent = percentOf(item, amount.substring(0, amount.length() - 1));
+            return new Variation(input, percent / 100, true);
+        }
+        UnitKind kind = input.name().startsWith("line.") || input.name().equals("length")
+                || input.name().endsWith("roughnessRms") ? UnitKind.LENGTH
+                : UnitKind.NUMBER;
+        double value = input.name().endsWith("conductivity") ? Units.parse("--vary", amount, UnitKind.CONDUCTIVITY)
+                : Units.parse("--vary", amount, kind);
+        if (!(value >= 0)) {
+            throw new InvalidInputException("--vary", item, "the tolerance must not be negative");
+        }
+        return new Variation(input, value, false);
+    }
+
+    private static double percentOf(String item, String text) {
+        try {
+            double value = Double.parseDouble(text.strip());
+            if (value >= 0 && value <= 100) {
+                return value;
+            }
+        } catch (NumberFormatException e) {
+            // refused below
+        }
+        throw new InvalidInputException("--vary", item, "expected a percentage from 0 to 100, e.g. height=±10%");
+    }
+
     /** Finds an input by its design-file path or its last part (e.g. {@code width}, {@code permittivity}). */
     public static Sensitivity.Input input(Design design, String name) {
         for (Sensitivity.Input input : Sensitivity.inputs(design)) {
@@ -148,6 +186,83 @@ public final class Tolerance {
         }
         double yield = Double.isNaN(specTargetOhm) || valid == 0 ? Double.NaN : (double) inSpec / samples;
         return new Result(samples, valid, frequencyHz, bands.get(0), bands.get(1), bands.get(2), yield);
+    }
+
+    /**
+     * 5-95 % bands across frequency: for each sample (drawn exactly as {@link #run} draws it), |Z0|,
+     * attenuation and phase velocity at every given frequency; then the 5th, 50th and 95th percentiles per
+     * frequency.
+     *
+     * @return [quantity: |Z0|, α dB/m, v_p][percentile: 5, 50, 95][frequency]
+     */
+    public static double[][][] bands(Design design, List<Variation> variations, Distribution distribution, int samples,
+            long seed, double[] frequenciesHz, int threads, IntConsumer progress, BooleanSupplier cancelled) {
+        int n = frequenciesHz.length;
+        double[][][] values = new double[3][n][samples];
+        boolean[] ok = new boolean[samples];
+        double[] nominals = new double[variations.size()];
+        for (int v = 0; v < nominals.length; v++) {
+            nominals[v] = variations.get(v).input().get().applyAsDouble(design);
+        }
+        AtomicInteger done = new AtomicInteger();
+        Runnable work = () -> IntStream.range(0, samples).parallel().forEach(i -> {
+            if (cancelled.getAsBoolean()) {
+                return;
+            }
+            SplittableRandom random = new SplittableRandom(mix(seed, i));
+            Design sample = design;
+            try {
+                for (int v = 0; v < nominals.length; v++) {
+                    Variation variation = variations.get(v);
+                    double half = variation.halfRange(nominals[v]);
+                    double draw = distribution == Distribution.UNIFORM ? random.nextDouble(-1.0, 1.0) * half
+                            : gaussian(random) * half / 3.0;
+                    sample = variation.input().set().apply(sample, nominals[v] + draw);
+                }
+                var model = sample.toModel();
+                for (int k = 0; k < n; k++) {
+                    LinePoint p = model.at(frequenciesHz[k]);
+                    values[0][k][i] = p.z0MagnitudeOhm();
+                    values[1][k][i] = p.alphaDbPerMetre();
+                    values[2][k][i] = p.phaseVelocityMetresPerSecond();
+                }
+                ok[i] = true;
+            } catch (InvalidInputException e) {
+                ok[i] = false;
+            }
+            int count = done.incrementAndGet();
+            if (count % 50 == 0) {
+                progress.accept(count);
+            }
+        });
+        ForkJoinPool pool = new ForkJoinPool(Math.max(1, threads));
+        try {
+            pool.submit(work).join();
+        } finally {
+            pool.shutdown();
+        }
+        if (cancelled.getAsBoolean()) {
+            throw new java.util.concurrent.CancellationException("tolerance run cancelled");
+        }
+        progress.accept(samples);
+        double[][][] bands = new double[3][3][n];
+        for (int q = 0; q < 3; q++) {
+            for (int k = 0; k < n; k++) {
+                double[] kept = new double[samples];
+                int valid = 0;
+                for (int i = 0; i < samples; i++) {
+                    if (ok[i]) {
+                        kept[valid++] = values[q][k][i];
+                    }
+                }
+                Percentile percentile = new Percentile().withEstimationType(Percentile.EstimationType.R_7);
+                percentile.setData(java.util.Arrays.copyOf(kept, valid));
+                bands[q][0][k] = valid == 0 ? Double.NaN : percentile.evaluate(5);
+                bands[q][1][k] = valid == 0 ? Double.NaN : percentile.evaluate(50);
+                bands[q][2][k] = valid == 0 ? Double.NaN : percentile.evaluate(95);
+            }
+        }
+        return bands;
     }
 
     /** Σ (half-range effect × σ/a)² per quantity: the root-sum-square variance estimate. */

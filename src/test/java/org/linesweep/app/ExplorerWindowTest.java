@@ -225,6 +225,28 @@ class ExplorerWindowTest {
     }
 
     @Test
+    void toleranceBandsAndYield(FxRobot robot) throws TimeoutException {
+        settle();
+        robot.clickOn("Tolerances");
+        var spec = robot.lookup("#tolerance-spec").queryAs(javafx.scene.control.TextField.class);
+        robot.interact(() -> spec.setText("50±10"));
+        var runButton = robot.lookup("#tolerance-run").queryAs(javafx.scene.control.Button.class);
+        robot.interact(runButton::fire);
+        WaitForAsyncUtils.waitFor(60, TimeUnit.SECONDS, () -> {
+            String shown = window.tolerance().resultLabel().getText();
+            return !shown.isEmpty() && !shown.startsWith("running");
+        });
+        WaitForAsyncUtils.waitForFxEvents();
+        assertTrue(window.plots().hasToleranceBands(), window.tolerance().resultLabel().getText());
+        assertFalse(window.plots().impedancePlot().getBands().isEmpty(), "a band around |Z0|");
+        assertFalse(window.plots().attenuationPlot().getBands().isEmpty(), "a band around the attenuation");
+        String text = window.tolerance().resultLabel().getText();
+        assertTrue(text.contains("yield") && text.contains("root-sum-square"), text);
+        robot.interact(() -> model.apply(d -> d.withLength(2.0)));
+        assertFalse(window.plots().hasToleranceBands(), "a changed design clears the stale band");
+    }
+
+    @Test
     void meetingModeAndUnits(FxRobot robot) throws TimeoutException {
         settle();
         robot.interact(() -> model.meetingModeProperty().set(true));

@@ -338,8 +338,14 @@ public final class DesignPanel extends VBox {
      * @return true if a solution was found and applied; otherwise the model's message says why
      */
     public boolean solveFor(String field, double targetOhm, double frequencyHz) {
-        org.linesweep.design.Synthesis.Target target = new org.linesweep.design.Synthesis.Target(
-                org.linesweep.design.Synthesis.Quantity.Z0_MAGNITUDE, targetOhm, frequencyHz);
+        return solveFor(field, org.linesweep.design.Synthesis.Quantity.Z0_MAGNITUDE, targetOhm, frequencyHz);
+    }
+
+    /** Solves the field for a target |Z0| (Ω), attenuation (dB/m) or delay (s/m) at a frequency. */
+    public boolean solveFor(String field, org.linesweep.design.Synthesis.Quantity quantity, double targetValue,
+            double frequencyHz) {
+        org.linesweep.design.Synthesis.Target target = new org.linesweep.design.Synthesis.Target(quantity, targetValue,
+                frequencyHz);
         try {
             org.linesweep.design.Synthesis.Solution solution =
                     org.linesweep.design.Synthesis.solve(model.getDesign(), field, target);
@@ -353,7 +359,26 @@ public final class DesignPanel extends VBox {
     private void askAndSolve(GeometryField field) {
         javafx.scene.control.Dialog<javafx.scene.control.ButtonType> dialog = new javafx.scene.control.Dialog<>();
         dialog.setTitle("Solve for " + field.label().toLowerCase());
-        dialog.setHeaderText("Which " + field.label().toLowerCase() + " gives this |Z0|?");
+        dialog.setHeaderText("Which " + field.label().toLowerCase() + " gives this target, all else held?");
+        javafx.scene.control.ChoiceBox<org.linesweep.design.Synthesis.Quantity> quantity = new javafx.scene.control.ChoiceBox<>(
+                FXCollections.observableArrayList(org.linesweep.design.Synthesis.Quantity.values()));
+        quantity.setValue(org.linesweep.design.Synthesis.Quantity.Z0_MAGNITUDE);
+        quantity.setId("solve-quantity");
+        quantity.setConverter(new javafx.util.StringConverter<>() {
+            @Override
+            public String toString(org.linesweep.design.Synthesis.Quantity q) {
+                return q == null ? "" : switch (q) {
+                    case Z0_MAGNITUDE -> "|Z0| (Ω)";
+                    case ATTENUATION -> "attenuation (dB/m)";
+                    case DELAY -> "delay (ns/m)";
+                };
+            }
+
+            @Override
+            public org.linesweep.design.Synthesis.Quantity fromString(String text) {
+                return null;
+            }
+        });
         javafx.scene.control.TextField ohms = new javafx.scene.control.TextField("50");
         ohms.setId("solve-target-ohm");
         javafx.scene.control.TextField at = new javafx.scene.control.TextField(
@@ -362,7 +387,7 @@ public final class DesignPanel extends VBox {
         javafx.scene.layout.GridPane grid = new javafx.scene.layout.GridPane();
         grid.setHgap(8);
         grid.setVgap(6);
-        grid.addRow(0, new Label("Target |Z0| (Ω)"), ohms);
+        grid.addRow(0, new Label("Target"), quantity, ohms);
         grid.addRow(1, new Label("at frequency"), at);
         dialog.getDialogPane().setContent(grid);
         dialog.getDialogPane().getButtonTypes().addAll(javafx.scene.control.ButtonType.OK,
@@ -374,9 +399,11 @@ public final class DesignPanel extends VBox {
                 if (!(target > 0) || !Double.isFinite(target)) {
                     throw new NumberFormatException();
                 }
-                solveFor(field.name(), target, frequency);
+                // delay is entered in ns/m for people, solved in s/m
+                double value = quantity.getValue() == org.linesweep.design.Synthesis.Quantity.DELAY ? target * 1e-9 : target;
+                solveFor(field.name(), quantity.getValue(), value, frequency);
             } catch (NumberFormatException e) {
-                model.report("Target |Z0|: '" + ohms.getText() + "' is not a positive number of ohms.");
+                model.report("Target: '" + ohms.getText() + "' is not a positive number.");
             } catch (org.linesweep.design.InvalidInputException e) {
                 model.report(e.getMessage());
             }

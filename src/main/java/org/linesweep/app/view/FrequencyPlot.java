@@ -50,6 +50,7 @@ public final class FrequencyPlot extends Region {
     private List<PlotSeries> series = List.of();
     private List<PlotMarker> markers = List.of();
     private List<PlotRegion> regions = List.of();
+    private List<PlotSeries[]> bands = List.of();
     private double[] yRange = {0, 1};
     private double[] rightRange = {0, 1};
     private boolean backgroundDirty = true;
@@ -156,6 +157,19 @@ public final class FrequencyPlot extends Region {
 
     public List<PlotRegion> getRegions() {
         return regions;
+    }
+
+    /**
+     * Shaded bands between pairs of curves (low, high), drawn behind the curves, in the low curve's colour at
+     * low opacity. The vertical axis is not rescaled for them.
+     */
+    public void setBands(List<PlotSeries[]> newBands) {
+        bands = List.copyOf(newBands);
+        markForeground();
+    }
+
+    public List<PlotSeries[]> getBands() {
+        return bands;
     }
 
     /** Shows the crosshair at a frequency, or hides it for NaN. */
@@ -403,6 +417,9 @@ public final class FrequencyPlot extends Region {
         for (PlotRegion region : regions) {
             drawRegion(g, region, bottom, right);
         }
+        for (PlotSeries[] band : bands) {
+            drawBand(g, band[0], band[1]);
+        }
         for (PlotSeries s : series) {
             drawSeries(g, s);
         }
@@ -472,6 +489,39 @@ public final class FrequencyPlot extends Region {
             g.setTextBaseline(VPos.TOP);
             g.setTextAlign(TextAlignment.CENTER);
             g.fillText(region.label(), (from + to) / 2, TOP + 2, Math.max(20, to - from - 4));
+        }
+    }
+
+    private void drawBand(GraphicsContext g, PlotSeries low, PlotSeries high) {
+        Scale scale = low.rightAxis() ? rightScale : yScale;
+        int n = Math.min(low.count(), high.count());
+        g.setFill(low.color().deriveColor(0, 1, 1, 0.22));
+        g.beginPath();
+        boolean started = false;
+        for (int i = 0; i < n; i++) {
+            double v = low.y()[i];
+            if (!Double.isFinite(v) || (scale == Scale.LOG && v <= 0)) {
+                continue;
+            }
+            double x = xOf(low.x()[i]);
+            double y = yOf(v, low.rightAxis());
+            if (started) {
+                g.lineTo(x, y);
+            } else {
+                g.moveTo(x, y);
+                started = true;
+            }
+        }
+        for (int i = n - 1; i >= 0; i--) {
+            double v = high.y()[i];
+            if (!Double.isFinite(v) || (scale == Scale.LOG && v <= 0)) {
+                continue;
+            }
+            g.lineTo(xOf(high.x()[i]), yOf(v, high.rightAxis()));
+        }
+        g.closePath();
+        if (started) {
+            g.fill();
         }
     }
 

@@ -51,6 +51,9 @@ public final class PlotsPane extends GridPane {
     private final ChoiceBox<ImpedanceForm> impedanceForm = new ChoiceBox<>();
     private final ChoiceBox<PerUnitLength> perUnitChoice = new ChoiceBox<>();
     private Palette palette = Palette.STANDARD;
+    /** Tolerance bands: frequencies and [|Z0|, α, v_p][p5, p50, p95][frequency], or null. */
+    private double[] bandFrequencies;
+    private double[][][] bandValues;
     /** Frequencies of the last sweep drawn, shared by all its series (one array per sweep). */
     private SweepResult framesOf;
     private double[] sharedFrequencies;
@@ -166,6 +169,33 @@ public final class PlotsPane extends GridPane {
         return box;
     }
 
+    /** Shows (or, with nulls, clears) the 5-95 % tolerance bands around the live curves. */
+    public void setToleranceBands(double[] frequencies, double[][][] bands) {
+        bandFrequencies = frequencies;
+        bandValues = bands;
+        redraw();
+    }
+
+    /** Whether tolerance bands are shown (for tests). */
+    public boolean hasToleranceBands() {
+        return bandValues != null;
+    }
+
+    private List<PlotSeries[]> band(int quantity, double scale) {
+        if (bandValues == null) {
+            return List.of();
+        }
+        double[] low = bandValues[quantity][0].clone();
+        double[] high = bandValues[quantity][2].clone();
+        for (int i = 0; i < low.length; i++) {
+            low[i] *= scale;
+            high[i] *= scale;
+        }
+        return List.<PlotSeries[]>of(new PlotSeries[] {
+            new PlotSeries("", bandFrequencies, low, low.length, palette.live(), 1, new double[0], false),
+            new PlotSeries("", bandFrequencies, high, high.length, palette.live(), 1, new double[0], false)});
+    }
+
     public List<FrequencyPlot> plots() {
         return List.of(attenuation, velocity, impedance, perUnit);
     }
@@ -266,6 +296,7 @@ public final class PlotsPane extends GridPane {
         series.add(live("dielectric", s, column(s, i -> scale(unit, s, s.dielectricAlphaDbPerMetre(i))),
                 new double[] {2, 3}, false));
         addPins(series, total, false);
+        attenuation.setBands(band(1, unit.wholeLine() ? s.lengthMetres() : unit.perDbPerMetre()));
         attenuation.setTitle("Attenuation");
         attenuation.setLeftAxis(unit.label(), FrequencyPlot.Scale.LOG);
         attenuation.setSeries(series);
@@ -285,6 +316,7 @@ public final class PlotsPane extends GridPane {
         series.add(live("group", s, column(s, i -> s.groupVelocityMetresPerSecond(i) / divisor), new double[] {8, 4},
                 false));
         addPins(series, phase, false);
+        velocity.setBands(band(2, 1 / divisor));
         velocity.setTitle("Velocity");
         velocity.setLeftAxis(fraction ? "fraction of c" : "m/s", FrequencyPlot.Scale.LINEAR);
         velocity.setSeries(series);
@@ -299,6 +331,7 @@ public final class PlotsPane extends GridPane {
             series.add(live("Im Z0", s, column(s, s::z0ImaginaryOhm), new double[] {8, 4}, false));
             addPins(series, real, false);
             impedance.setLeftAxis("Ω", FrequencyPlot.Scale.LINEAR);
+            impedance.setBands(List.of());
             impedance.setRightAxis("", FrequencyPlot.Scale.LINEAR);
         } else {
             java.util.function.Function<SweepResult, double[]> magnitude = r -> column(r, r::z0MagnitudeOhm);
@@ -307,6 +340,7 @@ public final class PlotsPane extends GridPane {
                     new double[] {8, 4}, true));
             addPins(series, magnitude, false);
             impedance.setLeftAxis("|Z0| Ω", FrequencyPlot.Scale.LOG);
+            impedance.setBands(band(0, 1));
             impedance.setRightAxis("phase °", FrequencyPlot.Scale.LINEAR);
         }
         impedance.setTitle("Impedance Z0");

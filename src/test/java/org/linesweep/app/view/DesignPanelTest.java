@@ -92,6 +92,8 @@ class DesignPanelTest {
         assertEquals(60.0, z0, 1e-7);
         robot.interact(() -> { model.undo(); });
         assertEquals(0.38e-3, model.getDesign().geometry().value("width"), 1e-15, "solving is one undo step");
+        assertTrue(panel.solveFor("height", org.linesweep.design.Synthesis.Quantity.ATTENUATION, 4.0, 1e9));
+        assertEquals(4.0, model.getDesign().toModel().at(1e9).alphaDbPerMetre(), 1e-8, "attenuation target");
         assertFalse(panel.solveFor("width", 5000, 1e9), "impossible target");
         assertTrue(model.messageProperty().get().startsWith("No solution"), model.messageProperty().get());
     }
