@@ -125,17 +125,8 @@ public final class Tolerance {
             if (cancelled.getAsBoolean()) {
                 return;
             }
-            SplittableRandom random = new SplittableRandom(mix(seed, i));
-            Design sample = design;
             try {
-                for (int v = 0; v < nominals.length; v++) {
-                    Variation variation = variations.get(v);
-                    double half = variation.halfRange(nominals[v]);
-                    double draw = distribution == Distribution.UNIFORM ? random.nextDouble(-1.0, 1.0) * half
-                            : gaussian(random) * half / 3.0;
-                    sample = variation.input().set().apply(sample, nominals[v] + draw);
-                }
-                LinePoint p = sample.toModel().at(frequencyHz);
+                LinePoint p = sample(design, variations, nominals, distribution, seed, i).toModel().at(frequencyHz);
                 z0[i] = p.z0MagnitudeOhm();
                 alpha[i] = p.alphaDbPerMetre();
                 delay[i] = p.delaySeconds(1.0);
@@ -209,17 +200,8 @@ public final class Tolerance {
             if (cancelled.getAsBoolean()) {
                 return;
             }
-            SplittableRandom random = new SplittableRandom(mix(seed, i));
-            Design sample = design;
             try {
-                for (int v = 0; v < nominals.length; v++) {
-                    Variation variation = variations.get(v);
-                    double half = variation.halfRange(nominals[v]);
-                    double draw = distribution == Distribution.UNIFORM ? random.nextDouble(-1.0, 1.0) * half
-                            : gaussian(random) * half / 3.0;
-                    sample = variation.input().set().apply(sample, nominals[v] + draw);
-                }
-                var model = sample.toModel();
+                var model = sample(design, variations, nominals, distribution, seed, i).toModel();
                 for (int k = 0; k < n; k++) {
                     LinePoint p = model.at(frequenciesHz[k]);
                     values[0][k][i] = p.z0MagnitudeOhm();
@@ -294,6 +276,26 @@ public final class Tolerance {
         } catch (InvalidInputException e) {
             return new double[] {Double.NaN, Double.NaN, Double.NaN};
         }
+    }
+
+    /**
+     * Sample i: every varied input drawn from sample i's own random stream (derived from the seed and i alone,
+     * so the draw does not depend on which thread makes it).
+     *
+     * @throws InvalidInputException when the draw gives a design the geometry does not allow
+     */
+    private static Design sample(Design design, List<Variation> variations, double[] nominals,
+            Distribution distribution, long seed, int i) {
+        SplittableRandom random = new SplittableRandom(mix(seed, i));
+        Design sample = design;
+        for (int v = 0; v < nominals.length; v++) {
+            Variation variation = variations.get(v);
+            double half = variation.halfRange(nominals[v]);
+            double draw = distribution == Distribution.UNIFORM ? random.nextDouble(-1.0, 1.0) * half
+                    : gaussian(random) * half / 3.0;
+            sample = variation.input().set().apply(sample, nominals[v] + draw);
+        }
+        return sample;
     }
 
     /** A standard normal draw (Box-Muller), from the sample's own stream. */
