@@ -95,7 +95,7 @@ public final class ExplorerWindow {
         left.setAlignment(javafx.geometry.Pos.TOP_CENTER);
         designScroll = new ScrollPane(left);
         designScroll.setFitToWidth(true);
-        designScroll.setPrefWidth(330);
+        designScroll.setPrefWidth(370);
         designScroll.setMinWidth(280);
         warnings.setId("warning-strip");
         warnings.getStyleClass().add("warning-strip");
@@ -198,7 +198,7 @@ public final class ExplorerWindow {
             root.getStyleClass().remove("meeting");
         }
         designPanel.setCompact(meeting);
-        designScroll.setPrefWidth(meeting ? 430 : 330);
+        designScroll.setPrefWidth(meeting ? 470 : 370);
         if (stage != null) {
             stage.setFullScreenExitHint("F5 leaves meeting mode");
             stage.setFullScreen(meeting);

@@ -322,6 +322,7 @@ public final class DesignPanel extends VBox {
             javafx.scene.control.Button solve = new javafx.scene.control.Button("solve…");
             solve.setId("solve-" + field.name());
             solve.getStyleClass().add("solve-button");
+            solve.setMinWidth(javafx.scene.layout.Region.USE_PREF_SIZE);
             solve.setTooltip(new Tooltip("Find the " + field.label().toLowerCase()
                     + " that gives a target |Z0|, all else held (Brent's method over its allowed range)"));
             solve.setOnAction(e -> askAndSolve(field));

@@ -65,6 +65,8 @@ public final class QuantityControl extends VBox {
         name.getStyleClass().add("quantity-label");
         text.setId(field.replace('.', '-'));
         text.setPrefColumnCount(7);
+        text.setMinWidth(javafx.scene.layout.Region.USE_PREF_SIZE);
+        name.setMinWidth(40);
         text.setTooltip(new Tooltip(rule.allowed() + ". Accepts units, e.g. " + rule.kind().example() + "."));
         text.setOnAction(e -> commitText());
         text.focusedProperty().addListener((o, was, is) -> {
