@@ -171,6 +171,9 @@ public final class PlotsPane extends GridPane {
 
     /** Shows (or, with nulls, clears) the 5-95 % tolerance bands around the live curves. */
     public void setToleranceBands(double[] frequencies, double[][][] bands) {
+        if (bands == null && bandValues == null) {
+            return; // nothing shown, nothing to clear: no redraw (this runs on every design change)
+        }
         bandFrequencies = frequencies;
         bandValues = bands;
         redraw();
