@@ -115,40 +115,13 @@ public final class Tolerance {
         double[] z0 = new double[samples];
         double[] alpha = new double[samples];
         double[] delay = new double[samples];
-        boolean[] ok = new boolean[samples];
-        double[] nominals = new double[variations.size()];
-        for (int v = 0; v < nominals.length; v++) {
-            nominals[v] = variations.get(v).input().get().applyAsDouble(design);
-        }
-        AtomicInteger done = new AtomicInteger();
-        Runnable work = () -> IntStream.range(0, samples).parallel().forEach(i -> {
-            if (cancelled.getAsBoolean()) {
-                return;
-            }
-            try {
-                LinePoint p = sample(design, variations, nominals, distribution, seed, i).toModel().at(frequencyHz);
-                z0[i] = p.z0MagnitudeOhm();
-                alpha[i] = p.alphaDbPerMetre();
-                delay[i] = p.delaySeconds(1.0);
-                ok[i] = true;
-            } catch (InvalidInputException e) {
-                ok[i] = false; // a draw outside what the geometry allows (e.g. inner above outer) is not built
-            }
-            int count = done.incrementAndGet();
-            if (count % 100 == 0) {
-                progress.accept(count);
-            }
+        double[] nominals = nominals(design, variations);
+        boolean[] ok = forEachSample(samples, threads, progress, cancelled, i -> {
+            LinePoint p = sample(design, variations, nominals, distribution, seed, i).toModel().at(frequencyHz);
+            z0[i] = p.z0MagnitudeOhm();
+            alpha[i] = p.alphaDbPerMetre();
+            delay[i] = p.delaySeconds(1.0);
         });
-        ForkJoinPool pool = new ForkJoinPool(Math.max(1, threads));
-        try {
-            pool.submit(work).join();
-        } finally {
-            pool.shutdown();
-        }
-        if (cancelled.getAsBoolean()) {
-            throw new java.util.concurrent.CancellationException("tolerance run cancelled");
-        }
-        progress.accept(samples);
         int valid = 0;
         int inSpec = 0;
         List<double[]> kept = List.of(new double[samples], new double[samples], new double[samples]);
@@ -190,43 +163,16 @@ public final class Tolerance {
             long seed, double[] frequenciesHz, int threads, IntConsumer progress, BooleanSupplier cancelled) {
         int n = frequenciesHz.length;
         double[][][] values = new double[3][n][samples];
-        boolean[] ok = new boolean[samples];
-        double[] nominals = new double[variations.size()];
-        for (int v = 0; v < nominals.length; v++) {
-            nominals[v] = variations.get(v).input().get().applyAsDouble(design);
-        }
-        AtomicInteger done = new AtomicInteger();
-        Runnable work = () -> IntStream.range(0, samples).parallel().forEach(i -> {
-            if (cancelled.getAsBoolean()) {
-                return;
-            }
-            try {
-                var model = sample(design, variations, nominals, distribution, seed, i).toModel();
-                for (int k = 0; k < n; k++) {
-                    LinePoint p = model.at(frequenciesHz[k]);
-                    values[0][k][i] = p.z0MagnitudeOhm();
-                    values[1][k][i] = p.alphaDbPerMetre();
-                    values[2][k][i] = p.phaseVelocityMetresPerSecond();
-                }
-                ok[i] = true;
-            } catch (InvalidInputException e) {
-                ok[i] = false;
-            }
-            int count = done.incrementAndGet();
-            if (count % 50 == 0) {
-                progress.accept(count);
+        double[] nominals = nominals(design, variations);
+        boolean[] ok = forEachSample(samples, threads, progress, cancelled, i -> {
+            var model = sample(design, variations, nominals, distribution, seed, i).toModel();
+            for (int k = 0; k < n; k++) {
+                LinePoint p = model.at(frequenciesHz[k]);
+                values[0][k][i] = p.z0MagnitudeOhm();
+                values[1][k][i] = p.alphaDbPerMetre();
+                values[2][k][i] = p.phaseVelocityMetresPerSecond();
             }
         });
-        ForkJoinPool pool = new ForkJoinPool(Math.max(1, threads));
-        try {
-            pool.submit(work).join();
-        } finally {
-            pool.shutdown();
-        }
-        if (cancelled.getAsBoolean()) {
-            throw new java.util.concurrent.CancellationException("tolerance run cancelled");
-        }
-        progress.accept(samples);
         double[][][] bands = new double[3][3][n];
         for (int q = 0; q < 3; q++) {
             for (int k = 0; k < n; k++) {
@@ -276,6 +222,58 @@ public final class Tolerance {
         } catch (InvalidInputException e) {
             return new double[] {Double.NaN, Double.NaN, Double.NaN};
         }
+    }
+
+    /** One sample's work; it throws {@link InvalidInputException} for a draw the geometry does not allow. */
+    @FunctionalInterface
+    private interface SampleWork {
+        void run(int index);
+    }
+
+    /**
+     * Runs the work for every sample index on a pool of the given size, reporting progress and honouring
+     * cancellation.
+     *
+     * @return which samples could be built (a draw outside what the geometry allows, e.g. an inner diameter
+     *         above the outer one, is not)
+     */
+    private static boolean[] forEachSample(int samples, int threads, IntConsumer progress, BooleanSupplier cancelled,
+            SampleWork work) {
+        boolean[] ok = new boolean[samples];
+        AtomicInteger done = new AtomicInteger();
+        ForkJoinPool pool = new ForkJoinPool(Math.max(1, threads));
+        try {
+            pool.submit(() -> IntStream.range(0, samples).parallel().forEach(i -> {
+                if (cancelled.getAsBoolean()) {
+                    return;
+                }
+                try {
+                    work.run(i);
+                    ok[i] = true;
+                } catch (InvalidInputException e) {
+                    ok[i] = false;
+                }
+                int count = done.incrementAndGet();
+                if (count % 50 == 0) {
+                    progress.accept(count);
+                }
+            })).join();
+        } finally {
+            pool.shutdown();
+        }
+        if (cancelled.getAsBoolean()) {
+            throw new java.util.concurrent.CancellationException("tolerance run cancelled");
+        }
+        progress.accept(samples);
+        return ok;
+    }
+
+    private static double[] nominals(Design design, List<Variation> variations) {
+        double[] nominals = new double[variations.size()];
+        for (int v = 0; v < nominals.length; v++) {
+            nominals[v] = variations.get(v).input().get().applyAsDouble(design);
+        }
+        return nominals;
     }
 
     /**
