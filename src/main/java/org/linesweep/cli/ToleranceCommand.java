@@ -21,7 +21,7 @@ import picocli.CommandLine.Spec;
 /** {@code linesweep tolerance}: Monte Carlo of manufacturing tolerances. */
 @Command(name = "tolerance", mixinStandardHelpOptions = true,
         description = "Vary inputs within their tolerances (Monte Carlo, reproducible with --seed) and print the 5, 50"
-                + " and 95 % points of |Z0|, attenuation and delay per metre at one frequency, the root-sum-square"
+                + " and 95 %% points of |Z0|, attenuation and delay per metre at one frequency, the root-sum-square"
                 + " estimate beside them, and the yield against a |Z0| spec.")
 final class ToleranceCommand implements Callable<Integer> {
 
@@ -32,7 +32,7 @@ final class ToleranceCommand implements Callable<Integer> {
     CommandSpec spec;
 
     @Option(names = "--vary", required = true, paramLabel = "FIELD=±X[%]",
-            description = "An input and its tolerance, e.g. width=±0.5mil, height=±10%, permittivity=±0.1,"
+            description = "An input and its tolerance, e.g. width=±0.5mil, height=±10%%, permittivity=±0.1,"
                     + " temperature=±10 (kelvin). Repeat for each input.")
     List<String> vary;
 
@@ -49,7 +49,7 @@ final class ToleranceCommand implements Callable<Integer> {
     @Option(names = "--at", paramLabel = "F", description = "Frequency (default 1 GHz).")
     String at;
 
-    @Option(names = "--spec-z0", paramLabel = "OHMS±PCT", description = "Yield spec, e.g. 50±10 (|Z0| within ±10 %).")
+    @Option(names = "--spec-z0", paramLabel = "OHMS±PCT", description = "Yield spec, e.g. 50±10 (|Z0| within ±10 %%).")
     String specZ0;
 
     @Option(names = "--out", paramLabel = "FILE", description = "Write to FILE (atomically) instead of standard output.")

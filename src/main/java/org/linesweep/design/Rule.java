@@ -40,6 +40,21 @@ public enum Rule {
     ROUGHNESS(UnitKind.LENGTH, 0.0, true, 1e-3, true, "a roughness from 0 to 1 mm"),
     /** Operating temperature. */
     TEMPERATURE(UnitKind.TEMPERATURE, 173.15, true, 773.15, true, "a temperature from -100 degC to 500 degC"),
+    /** The 10-90 % rise time of a source edge. */
+    RISE_TIME(UnitKind.TIME, 1e-15, true, 1.0, true, "a rise time from 1 fs to 1 s"),
+    /** A pulse width, square-wave period or record duration. */
+    TIME_SPAN(UnitKind.TIME, 0.0, false, 10.0, true, "a time greater than 0 and at most 10 s"),
+    /** A source resistance. */
+    SOURCE_RESISTANCE(UnitKind.RESISTANCE, 0.0, true, 1e6, true, "a resistance from 0 to 1 Mohm"),
+    /** A load resistance ("open" is written as such where it is allowed). */
+    LOAD_RESISTANCE(UnitKind.RESISTANCE, 0.0, false, 1e12, true,
+            "a resistance greater than 0 and at most 1 Tohm, or \"open\""),
+    /** A capacitance across a load. */
+    LOAD_CAPACITANCE(UnitKind.CAPACITANCE, 0.0, true, 1e-3, true, "a capacitance from 0 to 1 mF"),
+    /** The reference impedance of S-parameters. */
+    REFERENCE_IMPEDANCE(UnitKind.RESISTANCE, 0.0, false, 1e6, true, "a resistance greater than 0 and at most 1 Mohm"),
+    /** A target impedance. */
+    IMPEDANCE(UnitKind.RESISTANCE, 0.0, false, 1e6, true, "an impedance greater than 0 and at most 1 Mohm"),
     /** A total-loss budget. */
     LOSS_BUDGET(UnitKind.DECIBEL, 0.0, false, 1e6, true, "a loss greater than 0 dB");
 
@@ -125,6 +140,9 @@ public enum Rule {
             case TEMPERATURE -> String.format(Locale.ROOT, "%.6g K", value);
             case DECIBEL -> String.format(Locale.ROOT, "%.6g dB", value);
             case CONDUCTIVITY -> String.format(Locale.ROOT, "%.6g S/m", value);
+            case TIME -> Units.engineering(value, "s", 4);
+            case RESISTANCE -> Units.engineering(value, "ohm", 4);
+            case CAPACITANCE -> Units.engineering(value, "F", 4);
             case NUMBER -> String.format(Locale.ROOT, "%.6g", value);
         };
     }

@@ -14,6 +14,12 @@ public enum UnitKind {
     DECIBEL("a loss such as \"3 dB\""),
     /** Siemens per metre. */
     CONDUCTIVITY("a conductivity such as 5.8e7 or \"58 MS/m\""),
+    /** Seconds with SI prefixes. */
+    TIME("a time such as \"100 ps\", \"2.5 ns\" or 1e-9"),
+    /** Ohms with SI prefixes; "ohm", "ohms" and "Ω" are accepted. */
+    RESISTANCE("a resistance such as \"50\", \"50 ohm\" or \"1 kohm\""),
+    /** Farads with SI prefixes. */
+    CAPACITANCE("a capacitance such as \"2 pF\" or 1e-12"),
     /** A plain number. */
     NUMBER("a plain number such as 2.1");
 

@@ -87,12 +87,28 @@ public final class Units {
             case TEMPERATURE -> unit.equals("K") || isCelsius(unit) ? 1.0 : null;
             case DECIBEL -> unit.equals("dB") ? 1.0 : null;
             case CONDUCTIVITY -> unit.endsWith("S/m") ? PREFIXES.get(unit.substring(0, unit.length() - 3)) : null;
+            case TIME -> unit.endsWith("s") ? PREFIXES.get(unit.substring(0, unit.length() - 1)) : null;
+            case RESISTANCE -> resistance(unit);
+            case CAPACITANCE -> unit.endsWith("F") ? PREFIXES.get(unit.substring(0, unit.length() - 1)) : null;
             case NUMBER -> null;
         };
         if (factor == null) {
             throw new InvalidInputException(field, text, "unknown unit '" + unit + "'; expected " + kind.example());
         }
         return factor;
+    }
+
+    private static Double resistance(String unit) {
+        // resistor shorthand "4.7k", "1M" (common practice); a bare "m" is refused as too easily a mistake
+        if (unit.equals("k") || unit.equals("M") || unit.equals("G")) {
+            return PREFIXES.get(unit);
+        }
+        for (String name : new String[] {"ohms", "ohm", "Ω"}) {
+            if (unit.endsWith(name)) {
+                return PREFIXES.get(unit.substring(0, unit.length() - name.length()));
+            }
+        }
+        return null;
     }
 
     private static Double length(String unit) {

@@ -180,4 +180,55 @@ class CommandLineTest {
             assertTrue(r.out().contains(key), key);
         }
     }
+
+    @Test
+    void waveformWritesTheExactHeaderAndReadsOutDelay(@TempDir Path folder) throws IOException {
+        Path file = folder.resolve("edge.csv");
+        Run r = run("waveform", preset("bench-patch-lead"), "--shape", "step", "--rise", "500ps", "--source-ohm", "50",
+                "--load-ohm", "50", "--out", file.toString());
+        assertEquals(0, r.status(), r.err());
+        java.util.List<String> lines = Files.readAllLines(file);
+        assertEquals("time_s,input_v,output_v", lines.get(0));
+        assertTrue(lines.size() > 100);
+        // the preset's 1.5 m of PTFE coax (εr 2.06) delays the edge by L·sqrt(εr)/c = 7.17 ns, plus the
+        // conductors' internal inductance
+        assertTrue(r.err().matches("(?s).*delay 7\\.[12]\\d* ns.*"), r.err());
+        String[] last = lines.get(lines.size() - 1).split(",");
+        assertEquals(0.5, Double.parseDouble(last[2]), 0.01, "a matched line delivers half the source");
+    }
+
+    @Test
+    void waveformShapesAndInputErrors() {
+        Run pulse = run("waveform", preset("board-trace-50-ohm"), "--shape", "pulse", "--rise", "50ps", "--width", "1ns",
+                "--source-ohm", "25", "--load-ohm", "open", "--load-pf", "2");
+        assertEquals(0, pulse.status(), pulse.err());
+        Run square = run("waveform", preset("board-trace-50-ohm"), "--shape", "square", "--rise", "50ps", "--period",
+                "2ns", "--source-ohm", "25", "--load-ohm", "1k");
+        assertEquals(0, square.status(), square.err());
+        Run noWidth = run("waveform", preset("board-trace-50-ohm"), "--shape", "pulse", "--rise", "50ps",
+                "--source-ohm", "25", "--load-ohm", "50");
+        assertEquals(2, noWidth.status());
+        assertTrue(noWidth.err().contains("--width"), noWidth.err());
+        Run badRise = run("waveform", preset("board-trace-50-ohm"), "--shape", "step", "--rise", "-1ns",
+                "--source-ohm", "25", "--load-ohm", "50");
+        assertEquals(2, badRise.status());
+        assertTrue(badRise.err().contains("--rise") && badRise.err().contains("1 fs to 1 s"), badRise.err());
+        Run badShape = run("waveform", preset("board-trace-50-ohm"), "--shape", "ramp", "--rise", "1ns",
+                "--source-ohm", "25", "--load-ohm", "50");
+        assertEquals(2, badShape.status());
+        assertTrue(badShape.err().contains("step, pulse or square"), badShape.err());
+    }
+
+    @Test
+    void touchstoneFileParsesBackOnTheDesignGrid(@TempDir Path folder) throws IOException {
+        Path file = folder.resolve("lead.s2p");
+        Run r = run("touchstone", preset("bench-patch-lead"), "--reference-ohm", "75", "--out", file.toString());
+        assertEquals(0, r.status(), r.err());
+        org.linesweep.io.Touchstone.TwoPortData data = org.linesweep.io.Touchstone.read(file);
+        assertEquals(75.0, data.referenceOhm());
+        assertEquals(Presets.load("bench-patch-lead").sweep().points(), data.size());
+        Run bad = run("touchstone", preset("bench-patch-lead"), "--reference-ohm", "0", "--out", file.toString());
+        assertEquals(2, bad.status());
+        assertTrue(bad.err().contains("--reference-ohm"), bad.err());
+    }
 }
