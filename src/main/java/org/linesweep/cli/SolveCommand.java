@@ -34,6 +34,10 @@ final class SolveCommand implements Callable<Integer> {
     @Option(names = "--z0", paramLabel = "OHMS", description = "Target |Z0| in ohms.")
     String z0;
 
+    @Option(names = "--z-diff", paramLabel = "OHMS", description = "Target differential impedance 2·Zodd of a pair"
+            + " (a microstrip or stripline with line.gap), e.g. 85, 90 or 100.")
+    String zDiff;
+
     @Option(names = "--attenuation-db-per-m", paramLabel = "DB", description = "Target attenuation, dB/m.")
     String attenuation;
 
@@ -49,16 +53,20 @@ final class SolveCommand implements Callable<Integer> {
     @Override
     public Integer call() {
         PrintWriter err = spec.commandLine().getErr();
-        int given = (z0 == null ? 0 : 1) + (attenuation == null ? 0 : 1) + (delay == null ? 0 : 1);
+        int given = (z0 == null ? 0 : 1) + (zDiff == null ? 0 : 1) + (attenuation == null ? 0 : 1)
+                + (delay == null ? 0 : 1);
         if (given != 1) {
-            throw new InvalidInputException("--z0", z0, "give exactly one target: --z0, --attenuation-db-per-m or"
-                    + " --delay-s-per-m");
+            throw new InvalidInputException("--z0", z0, "give exactly one target: --z0, --z-diff,"
+                    + " --attenuation-db-per-m or --delay-s-per-m");
         }
         Design design = common.loadDesign();
         double frequency = at == null ? Synthesis.DEFAULT_FREQUENCY_HZ : Rule.FREQUENCY.parse("--at", at);
         Synthesis.Target target;
         if (z0 != null) {
             target = new Synthesis.Target(Synthesis.Quantity.Z0_MAGNITUDE, positive("--z0", z0), frequency);
+        } else if (zDiff != null) {
+            target = new Synthesis.Target(Synthesis.Quantity.DIFFERENTIAL_IMPEDANCE, positive("--z-diff", zDiff),
+                    frequency);
         } else if (attenuation != null) {
             target = new Synthesis.Target(Synthesis.Quantity.ATTENUATION, positive("--attenuation-db-per-m",
                     attenuation), frequency);
@@ -79,6 +87,11 @@ final class SolveCommand implements Callable<Integer> {
         json.put("z0Ohm", point.z0MagnitudeOhm());
         json.put("attenuationDbPerM", point.alphaDbPerMetre());
         json.put("delaySPerM", point.delaySeconds(1.0));
+        if (solution.design().geometry().isPair()) {
+            var modes = solution.design().toPair().modes(frequency);
+            json.put("zDiffOhm", modes.differentialImpedanceOhm());
+            json.put("zCommonOhm", modes.commonImpedanceOhm());
+        }
         json.put("frequencyHz", frequency);
         json.set("design", DesignFiles.toTree(solution.design()));
         Output.deliver(CommonOptions.path("--out", out), spec.commandLine().getOut(), stream -> stream.write(

@@ -83,7 +83,7 @@ final class SweepCommand implements Callable<Integer> {
             frequencies = design.sweep().grid().frequencies();
         }
         CommonOptions.printWarnings(design, err);
-        SweepResult result = new SweepEngine().run(design.toModel(), frequencies, design.lengthMetres());
+        SweepResult result = new SweepEngine().run(design.toModel(), design.toPair(), frequencies, design.lengthMetres());
         Output.deliver(CommonOptions.path("--out", out), spec.commandLine().getOut(), stream -> {
             if (format.equals("json")) {
                 SweepTable.writeJson(result, stream);

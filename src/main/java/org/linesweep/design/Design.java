@@ -69,6 +69,11 @@ public record Design(String name, String description, Geometry geometry, Conduct
         return geometry.toModel(conductor.toConductor(temperatureKelvin), dielectric.toDielectric());
     }
 
+    /** The edge-coupled pair this design describes, or null for a single line. */
+    public org.linesweep.physics.CoupledPair toPair() {
+        return geometry.toPair(dielectric.toDielectric());
+    }
+
     /** This design with one geometry field changed. */
     public Design withGeometryValue(String field, double valueMetres) {
         return withGeometry(geometry.with(field, valueMetres));
@@ -125,6 +130,9 @@ public record Design(String name, String description, Geometry geometry, Conduct
     /** {@link #warnings()} for this design's model, already built (it must be this design's). */
     public List<String> warnings(LineModel model) {
         List<String> warnings = new ArrayList<>(model.validityWarnings());
+        if (geometry.isPair()) {
+            warnings.addAll(toPair().validityWarnings());
+        }
         if (temperatureKelvin < WARN_TEMPERATURE_LOW_KELVIN || temperatureKelvin > WARN_TEMPERATURE_HIGH_KELVIN) {
             warnings.add(String.format(Locale.ROOT, "temperature: %.1f degC is outside -60..200 degC, where the"
                     + " linear resistivity law is trustworthy",

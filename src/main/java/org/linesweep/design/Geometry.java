@@ -6,6 +6,7 @@ import java.util.List;
 import java.util.Map;
 import org.linesweep.physics.Conductor;
 import org.linesweep.physics.CoaxLine;
+import org.linesweep.physics.CoupledPair;
 import org.linesweep.physics.Dielectric;
 import org.linesweep.physics.LineModel;
 import org.linesweep.physics.LineType;
@@ -29,6 +30,9 @@ public record Geometry(LineType type, Map<String, Double> valuesMetres) {
         Map<String, Double> ordered = new LinkedHashMap<>();
         for (GeometryField field : GeometryField.of(type)) {
             Double value = valuesMetres.get(field.name());
+            if (value == null && field.optional()) {
+                continue;
+            }
             if (value == null) {
                 throw new InvalidInputException("line." + field.name(), null,
                         "a " + type.key() + " line needs " + field.name() + ": " + field.rule().allowed());
@@ -45,11 +49,12 @@ public record Geometry(LineType type, Map<String, Double> valuesMetres) {
         checkRelations(type, valuesMetres);
     }
 
-    /** A geometry from values given in the order of {@link GeometryField#of}. */
+    /** A geometry from values given in the order of {@link GeometryField#of} (optional ones may be left off). */
     public static Geometry of(LineType type, double... valuesMetres) {
         List<GeometryField> fields = GeometryField.of(type);
-        if (fields.size() != valuesMetres.length) {
-            throw new IllegalArgumentException(type.key() + " takes " + fields.size() + " values");
+        long required = fields.stream().filter(field -> !field.optional()).count();
+        if (valuesMetres.length < required || valuesMetres.length > fields.size()) {
+            throw new IllegalArgumentException(type.key() + " takes " + required + " to " + fields.size() + " values");
         }
         Map<String, Double> map = new LinkedHashMap<>();
         for (int i = 0; i < valuesMetres.length; i++) {
@@ -73,6 +78,23 @@ public record Geometry(LineType type, Map<String, Double> valuesMetres) {
         };
     }
 
+    /** The fields this geometry has, in reading order: every required one and the optional ones given. */
+    public List<GeometryField> fields() {
+        return GeometryField.of(type).stream().filter(field -> valuesMetres.containsKey(field.name())).toList();
+    }
+
+    /** True when this is an edge-coupled pair (a microstrip or stripline with a gap). */
+    public boolean isPair() {
+        return valuesMetres.containsKey(GeometryField.GAP);
+    }
+
+    /** This geometry without an optional field (e.g. a pair made single again). */
+    public Geometry without(String field) {
+        Map<String, Double> map = new LinkedHashMap<>(valuesMetres);
+        map.remove(field);
+        return new Geometry(type, map);
+    }
+
     /** One field's value, m. */
     public double value(String field) {
         Double value = valuesMetres.get(field);
@@ -82,10 +104,11 @@ public record Geometry(LineType type, Map<String, Double> valuesMetres) {
         return value;
     }
 
-    /** This geometry with one field changed (validated like any other). */
+    /** This geometry with one field changed or an optional one added (validated like any other). */
     public Geometry with(String field, double valueMetres) {
         Map<String, Double> map = new LinkedHashMap<>(valuesMetres);
-        if (!map.containsKey(field)) {
+        boolean known = GeometryField.of(type).stream().anyMatch(f -> f.name().equals(field));
+        if (!known) {
             throw new InvalidInputException("line." + field, String.valueOf(valueMetres),
                     "a " + type.key() + " line has no such field; its fields are " + map.keySet());
         }
@@ -132,12 +155,22 @@ public record Geometry(LineType type, Map<String, Double> valuesMetres) {
         return Units.engineering(value, "m", 4);
     }
 
-    /** Builds the physics model of this geometry. */
+    /** The coupled pair this geometry describes, or null when it is a single line. */
+    public CoupledPair toPair(Dielectric dielectric) {
+        if (!isPair()) {
+            return null;
+        }
+        List<GeometryField> fields = GeometryField.of(type);
+        return new CoupledPair(type, value(fields.get(0).name()), value(fields.get(1).name()),
+                value(fields.get(2).name()), value(GeometryField.GAP), dielectric);
+    }
+
+    /** Builds the physics model of this geometry: for a pair, the model of one of its strips alone. */
     public LineModel toModel(Conductor conductor, Dielectric dielectric) {
         List<GeometryField> fields = GeometryField.of(type);
         double a = value(fields.get(0).name());
         double b = value(fields.get(1).name());
-        double c = fields.size() > 2 ? value(fields.get(2).name()) : 0.0;
+        double c = fields.size() > 2 && !fields.get(2).optional() ? value(fields.get(2).name()) : 0.0;
         return switch (type) {
             case COAX -> new CoaxLine(a, b, c, conductor, dielectric);
             case TWO_WIRE -> new TwoWireLine(a, b, conductor, dielectric);

@@ -70,7 +70,7 @@ public final class Sensitivity {
     /** The inputs of a design that can be varied. */
     public static List<Input> inputs(Design design) {
         List<Input> inputs = new ArrayList<>();
-        for (GeometryField field : GeometryField.of(design.geometry().type())) {
+        for (GeometryField field : design.geometry().fields()) {
             inputs.add(new Input("line." + field.name(), field.label(), false,
                     d -> d.geometry().value(field.name()), (d, v) -> d.withGeometryValue(field.name(), v)));
         }

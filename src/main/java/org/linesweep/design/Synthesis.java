@@ -28,7 +28,9 @@ public final class Synthesis {
         /** Attenuation, dB/m. */
         ATTENUATION("attenuation", "dB/m"),
         /** Phase delay per metre, s/m. */
-        DELAY("delay", "s/m");
+        DELAY("delay", "s/m"),
+        /** Differential impedance 2·Z_odd of an edge-coupled pair, Ω. */
+        DIFFERENTIAL_IMPEDANCE("Zdiff", "Ω");
 
         private final String label;
         private final String unit;
@@ -38,11 +40,27 @@ public final class Synthesis {
             this.unit = unit;
         }
 
-        double of(LinePoint p) {
+        /** What the quantity is called in messages. */
+        public String label() {
+            return label;
+        }
+
+        /** Its unit. */
+        public String unit() {
+            return unit;
+        }
+
+        /** The quantity's value for a design at a frequency. */
+        public double of(Design design, double frequencyHz) {
+            if (this == DIFFERENTIAL_IMPEDANCE) {
+                return design.toPair().modes(frequencyHz).differentialImpedanceOhm();
+            }
+            LinePoint p = design.toModel().at(frequencyHz);
             return switch (this) {
                 case Z0_MAGNITUDE -> p.z0MagnitudeOhm();
                 case ATTENUATION -> p.alphaDbPerMetre();
                 case DELAY -> p.delaySeconds(1.0);
+                case DIFFERENTIAL_IMPEDANCE -> throw new IllegalStateException();
             };
         }
     }
@@ -80,10 +98,18 @@ public final class Synthesis {
      * @throws NoSolutionException if the target cannot be met in the allowed range
      */
     public static Solution solve(Design design, String field, Target target) {
+        if (target.quantity() == Quantity.DIFFERENTIAL_IMPEDANCE && !design.geometry().isPair()) {
+            throw new InvalidInputException("line.gap", null, "a differential target needs a pair: a microstrip or"
+                    + " stripline with line.gap, the edge-to-edge spacing to its twin strip");
+        }
+        if (!design.geometry().valuesMetres().containsKey(field)) {
+            throw new InvalidInputException("--for", field, "the design has the fields "
+                    + design.geometry().valuesMetres().keySet());
+        }
         double[] range = allowedRange(design.geometry(), field);
         DoubleUnaryOperator error = logValue -> {
             Design trial = design.withGeometryValue(field, Math.exp(logValue));
-            return target.quantity().of(trial.toModel().at(target.frequencyHz())) / target.value() - 1.0;
+            return target.quantity().of(trial, target.frequencyHz()) / target.value() - 1.0;
         };
         double low = Math.log(range[0]);
         double high = Math.log(range[1]);
@@ -93,9 +119,15 @@ public final class Synthesis {
         double bestHigh = Double.NaN;
         double previousX = low;
         double previousE = safe(error, low);
+        double lowestE = Double.isFinite(previousE) ? previousE : Double.POSITIVE_INFINITY;
+        double highestE = Double.isFinite(previousE) ? previousE : Double.NEGATIVE_INFINITY;
         for (int i = 1; i <= BRACKET_STEPS; i++) {
             double x = low + (high - low) * i / BRACKET_STEPS;
             double e = safe(error, x);
+            if (Double.isFinite(e)) {
+                lowestE = Math.min(lowestE, e);
+                highestE = Math.max(highestE, e);
+            }
             if (Double.isFinite(previousE) && Double.isFinite(e) && Math.signum(previousE) != Math.signum(e)) {
                 if (Double.isNaN(bestLow) || distance(previousX, x, current) < distance(bestLow, bestHigh, current)) {
                     bestLow = previousX;
@@ -106,16 +138,20 @@ public final class Synthesis {
             previousE = e;
         }
         if (Double.isNaN(bestLow)) {
+            String reachable = lowestE <= highestE ? String.format(Locale.ROOT, " (over that range it spans %.4g to"
+                    + " %.4g %s)", (1 + lowestE) * target.value(), (1 + highestE) * target.value(),
+                    target.quantity().unit) : "";
             throw new NoSolutionException(String.format(Locale.ROOT,
-                    "no %s between %s and %s gives %s = %.6g %s at %s", field,
+                    "no %s between %s and %s gives %s = %.6g %s at %s%s", field,
                     Units.engineering(range[0], "m", 4), Units.engineering(range[1], "m", 4), target.quantity().label,
-                    target.value(), target.quantity().unit, Units.engineering(target.frequencyHz(), "Hz", 4)));
+                    target.value(), target.quantity().unit, Units.engineering(target.frequencyHz(), "Hz", 4),
+                    reachable));
         }
         BrentSolver solver = new BrentSolver(RELATIVE_ACCURACY * 1e-3, RELATIVE_ACCURACY);
         double root = solver.solve(200, error::applyAsDouble, bestLow, bestHigh);
         double value = Math.exp(root);
         Design solved = design.withGeometryValue(field, value);
-        double achieved = target.quantity().of(solved.toModel().at(target.frequencyHz()));
+        double achieved = target.quantity().of(solved, target.frequencyHz());
         return new Solution(solved, field, value, achieved);
     }
 

@@ -130,6 +130,9 @@ public final class DesignFiles {
         checkFields(line, "line.", allowed);
         for (GeometryField field : GeometryField.of(type)) {
             String path = "line." + field.name();
+            if (field.optional() && !line.has(field.name())) {
+                continue;
+            }
             values.put(field.name(), quantity(required(line, field.name(), "line."), path, field.rule()));
         }
         return new Geometry(type, values);

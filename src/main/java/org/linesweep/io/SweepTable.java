@@ -40,27 +40,52 @@ public final class SweepTable {
             new Column("eps_eff", SweepResult::effectivePermittivity),
             new Column("skin_depth_m", SweepResult::skinDepthMetres));
 
+    /** The columns an edge-coupled pair's sweep adds after {@link #COLUMNS}. */
+    public static final List<Column> PAIR_COLUMNS = List.of(
+            new Column("z_odd_ohm", SweepResult::oddImpedanceOhm),
+            new Column("z_even_ohm", SweepResult::evenImpedanceOhm),
+            new Column("z_diff_ohm", SweepResult::differentialImpedanceOhm),
+            new Column("z_common_ohm", SweepResult::commonImpedanceOhm),
+            new Column("eps_eff_odd", SweepResult::oddEffectivePermittivity),
+            new Column("eps_eff_even", SweepResult::evenEffectivePermittivity));
+
     private SweepTable() {
     }
 
-    /** The CSV header line, without a line break. */
+    /** The columns of a sweep: the line's, and a pair's after them. */
+    public static List<Column> columns(SweepResult sweep) {
+        if (!sweep.isPair()) {
+            return COLUMNS;
+        }
+        List<Column> all = new java.util.ArrayList<>(COLUMNS);
+        all.addAll(PAIR_COLUMNS);
+        return List.copyOf(all);
+    }
+
+    /** The CSV header line of a single line's sweep, without a line break. */
     public static String csvHeader() {
         return String.join(",", COLUMNS.stream().map(Column::name).toList());
+    }
+
+    /** The CSV header line of this sweep, without a line break. */
+    public static String csvHeader(SweepResult sweep) {
+        return String.join(",", columns(sweep).stream().map(Column::name).toList());
     }
 
     /** Writes the sweep as CSV (header, then one line per frequency, "\n" line ends). */
     public static void writeCsv(SweepResult sweep, OutputStream stream) throws IOException {
         Writer out = new OutputStreamWriter(stream, StandardCharsets.UTF_8);
-        out.write(csvHeader());
+        List<Column> columns = columns(sweep);
+        out.write(csvHeader(sweep));
         out.write('\n');
         StringBuilder row = new StringBuilder(512);
         for (int i = 0; i < sweep.size(); i++) {
             row.setLength(0);
-            for (int c = 0; c < COLUMNS.size(); c++) {
+            for (int c = 0; c < columns.size(); c++) {
                 if (c > 0) {
                     row.append(',');
                 }
-                double value = COLUMNS.get(c).value().apply(sweep, i);
+                double value = columns.get(c).value().apply(sweep, i);
                 if (Double.isFinite(value)) {
                     row.append(value);
                 }
@@ -76,15 +101,16 @@ public final class SweepTable {
         try (JsonGenerator json = DesignFiles.mapper().getFactory().createGenerator(stream, JsonEncoding.UTF8)) {
             json.configure(JsonGenerator.Feature.AUTO_CLOSE_TARGET, false);
             json.writeStartObject();
+            List<Column> columns = columns(sweep);
             json.writeArrayFieldStart("columns");
-            for (Column column : COLUMNS) {
+            for (Column column : columns) {
                 json.writeString(column.name());
             }
             json.writeEndArray();
             json.writeArrayFieldStart("rows");
             for (int i = 0; i < sweep.size(); i++) {
                 json.writeStartArray();
-                for (Column column : COLUMNS) {
+                for (Column column : columns) {
                     double value = column.value().apply(sweep, i);
                     if (Double.isFinite(value)) {
                         json.writeNumber(value);

@@ -1,6 +1,8 @@
 package org.linesweep.sweep;
 
+import org.linesweep.physics.CoupledPair;
 import org.linesweep.physics.LineModel;
+import org.linesweep.physics.PairModes;
 import org.linesweep.physics.LineParameters;
 import org.linesweep.physics.Telegrapher;
 
@@ -23,6 +25,31 @@ public final class SweepEngine {
         return run(model, grid.frequencies(), lengthMetres);
     }
 
+    /** Computes a sweep of a line that may be one strip of an edge-coupled pair (null for a single line). */
+    public SweepResult run(LineModel model, CoupledPair pair, double[] frequenciesHz, double lengthMetres) {
+        return addPair(pair, run(model, frequenciesHz, lengthMetres));
+    }
+
+    /**
+     * Fills the pair's mode values at the sweep's frequencies, or marks the sweep as a single line's when
+     * {@code pair} is null.
+     *
+     * @return {@code result}
+     */
+    public SweepResult addPair(CoupledPair pair, SweepResult result) {
+        result.preparePair(pair != null);
+        if (pair != null) {
+            for (int i = 0; i < result.size(); i++) {
+                PairModes modes = pair.modes(result.frequencyHz[i]);
+                result.oddImpedanceOhm[i] = modes.oddImpedanceOhm();
+                result.evenImpedanceOhm[i] = modes.evenImpedanceOhm();
+                result.oddEffectivePermittivity[i] = modes.oddEffectivePermittivity();
+                result.evenEffectivePermittivity[i] = modes.evenEffectivePermittivity();
+            }
+        }
+        return result;
+    }
+
     /**
      * Computes a sweep into {@code reuse}, whose arrays are kept when large enough. The caller must own
      * {@code reuse}: nobody else may be reading it.
@@ -32,6 +59,7 @@ public final class SweepEngine {
      */
     public SweepResult run(LineModel model, double[] frequenciesHz, int count, double lengthMetres, SweepResult reuse) {
         reuse.prepare(count, lengthMetres);
+        reuse.preparePair(false);
         for (int i = 0; i < count; i++) {
             double f = frequenciesHz[i];
             model.evaluateWithSlopes(f, scratch);

@@ -26,6 +26,11 @@ public final class SweepResult {
     double[] groupVelocityMetresPerSecond = new double[0];
     double[] effectivePermittivity = new double[0];
     double[] skinDepthMetres = new double[0];
+    private boolean pair;
+    double[] oddImpedanceOhm = new double[0];
+    double[] evenImpedanceOhm = new double[0];
+    double[] oddEffectivePermittivity = new double[0];
+    double[] evenEffectivePermittivity = new double[0];
 
     /** Makes sure every array holds at least n points; keeps the arrays if they are large enough. */
     void prepare(int n, double length) {
@@ -46,6 +51,52 @@ public final class SweepResult {
             effectivePermittivity = new double[n];
             skinDepthMetres = new double[n];
         }
+    }
+
+    /** Makes room for the pair columns and marks this sweep as a pair's (or not). */
+    void preparePair(boolean isPair) {
+        this.pair = isPair;
+        if (isPair && oddImpedanceOhm.length < size) {
+            oddImpedanceOhm = new double[size];
+            evenImpedanceOhm = new double[size];
+            oddEffectivePermittivity = new double[size];
+            evenEffectivePermittivity = new double[size];
+        }
+    }
+
+    /** True when the sweep also holds an edge-coupled pair's mode values. */
+    public boolean isPair() {
+        return pair;
+    }
+
+    /** Odd-mode impedance of the pair, Ω; NaN for a single line. */
+    public double oddImpedanceOhm(int i) {
+        return pair ? oddImpedanceOhm[i] : Double.NaN;
+    }
+
+    /** Even-mode impedance of the pair, Ω; NaN for a single line. */
+    public double evenImpedanceOhm(int i) {
+        return pair ? evenImpedanceOhm[i] : Double.NaN;
+    }
+
+    /** Differential impedance 2·Z_odd, Ω; NaN for a single line. */
+    public double differentialImpedanceOhm(int i) {
+        return 2 * oddImpedanceOhm(i);
+    }
+
+    /** Common-mode impedance Z_even/2, Ω; NaN for a single line. */
+    public double commonImpedanceOhm(int i) {
+        return evenImpedanceOhm(i) / 2;
+    }
+
+    /** Odd-mode effective permittivity; NaN for a single line. */
+    public double oddEffectivePermittivity(int i) {
+        return pair ? oddEffectivePermittivity[i] : Double.NaN;
+    }
+
+    /** Even-mode effective permittivity; NaN for a single line. */
+    public double evenEffectivePermittivity(int i) {
+        return pair ? evenEffectivePermittivity[i] : Double.NaN;
     }
 
     /** Number of points. */

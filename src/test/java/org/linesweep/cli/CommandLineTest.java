@@ -231,4 +231,26 @@ class CommandLineTest {
         assertEquals(2, bad.status());
         assertTrue(bad.err().contains("--reference-ohm"), bad.err());
     }
+
+    @Test
+    void pairSweepAddsTheModeColumns(@TempDir Path folder) throws IOException {
+        Path pair = folder.resolve("pair.json");
+        DesignFiles.write(pair, Presets.load("board-trace-50-ohm").withGeometryValue("gap", 0.2e-3));
+        Run r = run("sweep", pair.toString(), "--at", "1GHz");
+        assertEquals(0, r.status(), r.err());
+        String[] lines = r.out().split("\n");
+        assertEquals(HEADER + ",z_odd_ohm,z_even_ohm,z_diff_ohm,z_common_ohm,eps_eff_odd,eps_eff_even", lines[0]);
+        String[] cells = lines[1].split(",");
+        double odd = Double.parseDouble(cells[15]);
+        double even = Double.parseDouble(cells[16]);
+        assertEquals(2 * odd, Double.parseDouble(cells[17]), 1e-9 * odd);
+        assertEquals(even / 2, Double.parseDouble(cells[18]), 1e-9 * even);
+        assertTrue(odd < even);
+        Run solved = run("solve", pair.toString(), "--for", "gap", "--z-diff", "90");
+        assertEquals(0, solved.status(), solved.err());
+        assertTrue(solved.out().contains("\"zDiffOhm\" : 90.0"), solved.out());
+        Run single = run("solve", preset("board-trace-50-ohm"), "--for", "width", "--z-diff", "90");
+        assertEquals(2, single.status());
+        assertTrue(single.err().contains("line.gap"), single.err());
+    }
 }

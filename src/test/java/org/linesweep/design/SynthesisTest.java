@@ -84,4 +84,32 @@ class SynthesisTest {
         assertTrue(outer[0] > 1e-3);
         assertEquals(DielectricMaterial.PTFE.key(), "ptfe");
     }
+
+    /**
+     * Differential targets of 85, 90 and 100 Ω (common practice for high-speed serial pairs): solving the
+     * gap or the width of a pair lands on the target, and the solved design analyses back to it.
+     */
+    @org.junit.jupiter.params.ParameterizedTest
+    @org.junit.jupiter.params.provider.CsvSource({"board-trace-50-ohm, width, 85", "board-trace-50-ohm, width, 100",
+        "board-trace-50-ohm, gap, 90", "buried-clock-stripline, gap, 85", "buried-clock-stripline, width, 100"})
+    void differentialTargets(String preset, String field, double targetOhm) {
+        Design single = Presets.load(preset);
+        Design pair = single.withGeometryValue("gap", single.geometry().value("width"));
+        if (field.equals("gap") && preset.startsWith("board")) {
+            pair = pair.withGeometryValue("width", 0.3e-3); // narrower strips so that 90 Ω is reachable
+        }
+        Synthesis.Solution solution = Synthesis.solve(pair, field,
+                new Synthesis.Target(Synthesis.Quantity.DIFFERENTIAL_IMPEDANCE, targetOhm, 1e9));
+        double achieved = solution.design().toPair().modes(1e9).differentialImpedanceOhm();
+        assertEquals(targetOhm, achieved, 1e-9 * targetOhm);
+    }
+
+    @Test
+    void differentialTargetNeedsAPair() {
+        Design single = Presets.load("board-trace-50-ohm");
+        InvalidInputException error = org.junit.jupiter.api.Assertions.assertThrows(InvalidInputException.class,
+                () -> Synthesis.solve(single, "width",
+                        new Synthesis.Target(Synthesis.Quantity.DIFFERENTIAL_IMPEDANCE, 100, 1e9)));
+        assertTrue(error.getMessage().contains("line.gap"), error.getMessage());
+    }
 }

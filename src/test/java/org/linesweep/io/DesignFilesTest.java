@@ -131,4 +131,26 @@ class DesignFilesTest {
             assertEquals(1, files.count());
         }
     }
+
+    @Test
+    void pairGapIsOptionalAndOnlyForStrips() {
+        String pair = """
+                { "line": { "type": "stripline", "width": "0.15 mm", "spacing": "0.5 mm", "thickness": "17.5 um",
+                            "gap": "6 mil" },
+                  "conductor": { "material": "copper" }, "dielectric": { "material": "epoxy-glass" }, "length": "0.2 m" }
+                """;
+        Design d = DesignFiles.parse(pair);
+        assertTrue(d.geometry().isPair());
+        assertEquals(6 * 25.4e-6, d.geometry().value("gap"), 1e-15);
+        Design back = DesignFiles.parse(DesignFiles.toJson(d));
+        assertEquals(d.geometry(), back.geometry());
+        assertTrue(!DesignFiles.parse(pair.replace(",\n                            \"gap\": \"6 mil\"", "")).geometry().isPair());
+        InvalidInputException onCoax = assertThrows(InvalidInputException.class,
+                () -> DesignFiles.parse(MINIMAL.replace("\"outerThickness\": \"0.25 mm\"",
+                        "\"outerThickness\": \"0.25 mm\", \"gap\": \"1 mm\"")));
+        assertTrue(onCoax.getMessage().contains("line.gap"), onCoax.getMessage());
+        InvalidInputException negative = assertThrows(InvalidInputException.class,
+                () -> DesignFiles.parse(pair.replace("6 mil", "-6 mil")));
+        assertTrue(negative.getMessage().startsWith("line.gap"), negative.getMessage());
+    }
 }

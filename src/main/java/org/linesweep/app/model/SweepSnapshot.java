@@ -27,7 +27,8 @@ public record SweepSnapshot(long sequence, Design design, LineModel model, Sweep
     /** Computes a snapshot; runs off the FX thread. */
     public static SweepSnapshot compute(long sequence, Design design) {
         LineModel model = design.toModel();
-        SweepResult sweep = new SweepEngine().run(model, design.sweep().grid(), design.lengthMetres());
+        SweepResult sweep = new SweepEngine().run(model, design.toPair(), design.sweep().grid().frequencies(),
+                design.lengthMetres());
         FrequencyLimits limits = LimitFinder.find(model, design.lengthMetres(), design.threshold(),
                 design.lossBudgetDb());
         return new SweepSnapshot(sequence, design, model, sweep, limits, LossRegions.of(model),

@@ -42,6 +42,8 @@ public final class DesignPanel extends VBox {
     private final ComboBox<LineType> type = new ComboBox<>(FXCollections.observableArrayList(LineType.values()));
     private final VBox geometryBox = new VBox(2);
     private final Map<String, QuantityControl> geometryControls = new LinkedHashMap<>();
+    /** Makes a microstrip or stripline a pair; null for the other types. */
+    private javafx.scene.control.CheckBox pairToggle;
     private final ComboBox<String> conductor = new ComboBox<>();
     private final ComboBox<String> dielectric = new ComboBox<>();
     private final ComboBox<DielectricModelKind> dielectricModel =
@@ -316,6 +318,25 @@ public final class DesignPanel extends VBox {
         geometryControls.clear();
         geometryBox.getChildren().clear();
         for (GeometryField field : GeometryField.of(lineType)) {
+            if (field.optional()) {
+                pairToggle = new javafx.scene.control.CheckBox("Edge-coupled pair (differential)");
+                pairToggle.setId("pair-toggle");
+                pairToggle.setTooltip(new Tooltip("Add an identical twin strip beside this one, a gap apart:"
+                        + " odd/even, differential and common-mode impedances appear in the plots and read-out"));
+                pairToggle.selectedProperty().addListener((o, was, now) -> {
+                    if (updating) {
+                        return;
+                    }
+                    if (now) {
+                        // start from a gap equal to the strip width: a loosely coupled, common layout
+                        model.apply(d -> d.withGeometryValue(GeometryField.GAP,
+                                d.geometry().value(GeometryField.of(d.geometry().type()).get(0).name())));
+                    } else {
+                        model.apply(d -> d.withGeometry(d.geometry().without(GeometryField.GAP)));
+                    }
+                });
+                geometryBox.getChildren().add(pairToggle);
+            }
             QuantityControl control = slider(field.label(), "line." + field.name(), field.rule(),
                     v -> Display.length(v, model.unitSystemProperty().get()),
                     (d, v) -> d.withGeometryValue(field.name(), v));
@@ -329,6 +350,12 @@ public final class DesignPanel extends VBox {
             control.addAction(solve);
             geometryControls.put(field.name(), control);
             geometryBox.getChildren().add(control);
+            if (field.optional()) {
+                control.managedProperty().bind(control.visibleProperty());
+            }
+        }
+        if (!GeometryField.pairable(lineType)) {
+            pairToggle = null;
         }
         shownType = lineType;
     }
@@ -361,9 +388,17 @@ public final class DesignPanel extends VBox {
         javafx.scene.control.Dialog<javafx.scene.control.ButtonType> dialog = new javafx.scene.control.Dialog<>();
         dialog.setTitle("Solve for " + field.label().toLowerCase());
         dialog.setHeaderText("Which " + field.label().toLowerCase() + " gives this target, all else held?");
-        javafx.scene.control.ChoiceBox<org.linesweep.design.Synthesis.Quantity> quantity = new javafx.scene.control.ChoiceBox<>(
-                FXCollections.observableArrayList(org.linesweep.design.Synthesis.Quantity.values()));
-        quantity.setValue(org.linesweep.design.Synthesis.Quantity.Z0_MAGNITUDE);
+        javafx.collections.ObservableList<org.linesweep.design.Synthesis.Quantity> quantities =
+                FXCollections.observableArrayList(org.linesweep.design.Synthesis.Quantity.values());
+        boolean pair = model.getDesign().geometry().isPair();
+        if (!pair) {
+            quantities.remove(org.linesweep.design.Synthesis.Quantity.DIFFERENTIAL_IMPEDANCE);
+        }
+        javafx.scene.control.ChoiceBox<org.linesweep.design.Synthesis.Quantity> quantity =
+                new javafx.scene.control.ChoiceBox<>(quantities);
+        // a pair's designers set differential targets (85, 90, 100 Ω are the usual ones)
+        quantity.setValue(pair ? org.linesweep.design.Synthesis.Quantity.DIFFERENTIAL_IMPEDANCE
+                : org.linesweep.design.Synthesis.Quantity.Z0_MAGNITUDE);
         quantity.setId("solve-quantity");
         quantity.setConverter(new javafx.util.StringConverter<>() {
             @Override
@@ -372,6 +407,7 @@ public final class DesignPanel extends VBox {
                     case Z0_MAGNITUDE -> "|Z0| (Ω)";
                     case ATTENUATION -> "attenuation (dB/m)";
                     case DELAY -> "delay (ns/m)";
+                    case DIFFERENTIAL_IMPEDANCE -> "Zdiff of the pair (Ω)";
                 };
             }
 
@@ -380,7 +416,7 @@ public final class DesignPanel extends VBox {
                 return null;
             }
         });
-        javafx.scene.control.TextField ohms = new javafx.scene.control.TextField("50");
+        javafx.scene.control.TextField ohms = new javafx.scene.control.TextField(pair ? "100" : "50");
         ohms.setId("solve-target-ohm");
         javafx.scene.control.TextField at = new javafx.scene.control.TextField(
                 Display.frequency(org.linesweep.design.Synthesis.DEFAULT_FREQUENCY_HZ));
@@ -428,6 +464,12 @@ public final class DesignPanel extends VBox {
             }
             type.setValue(lineType);
             design.geometry().valuesMetres().forEach((name, value) -> geometryControls.get(name).show(value));
+            QuantityControl gap = geometryControls.get(GeometryField.GAP);
+            if (gap != null) {
+                boolean pair = design.geometry().isPair();
+                gap.setVisible(pair);
+                pairToggle.setSelected(pair);
+            }
             lineLength.show(design.lengthMetres());
             ConductorSpec c = design.conductor();
             conductor.setValue(c.materialKey() == null ? CUSTOM : c.materialKey());

@@ -346,7 +346,20 @@ public final class PlotsPane extends GridPane {
             impedance.setBands(band(0, 1));
             impedance.setRightAxis("phase °", FrequencyPlot.Scale.LINEAR);
         }
-        impedance.setTitle("Impedance Z0");
+        if (s.isPair()) {
+            // the pair's own impedances share the left axis: Zdiff is what a differential target names
+            series.add(live("Zdiff", s, column(s, s::differentialImpedanceOhm), new double[] {14, 4, 3, 4}, false));
+            series.add(live("Zcommon", s, column(s, s::commonImpedanceOhm), new double[] {3, 3}, false));
+            for (Pin pin : model.pins()) {
+                SweepResult p = pin.snapshot().sweep();
+                if (p.isPair()) {
+                    series.add(new PlotSeries(pin.label() + " Zdiff", column(p, p::frequencyHz),
+                            column(p, p::differentialImpedanceOhm), p.size(), palette.pin(pin.slot()), 1.8,
+                            new double[] {14, 4, 3, 4}, false));
+                }
+            }
+        }
+        impedance.setTitle(s.isPair() ? "Impedance: Z0 of one strip, pair Zdiff and Zcommon" : "Impedance Z0");
         impedance.setSeries(series);
     }
 

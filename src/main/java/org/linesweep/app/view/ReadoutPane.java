@@ -9,6 +9,7 @@ import org.linesweep.app.model.ExplorerModel;
 import org.linesweep.app.model.SweepSnapshot;
 import org.linesweep.physics.FrequencyLimits;
 import org.linesweep.physics.LinePoint;
+import org.linesweep.physics.PairModes;
 import org.linesweep.physics.PhysicalConstants;
 
 /**
@@ -22,10 +23,13 @@ public final class ReadoutPane extends VBox {
     private final Label limitsLine = new Label();
     private final Label where = new Label();
     private final GridPane values = new GridPane();
-    private final Label[] cells = new Label[14];
     private static final String[] NAMES = {"|Z0|", "Z0", "α", "loss over length", "conductor / dielectric",
         "phase velocity", "group velocity", "wavelength", "L/λ", "ε_eff", "skin depth", "R′ / L′", "G′ / C′",
-        "delay"};
+        "delay", "pair Zdiff / Zcommon", "pair Zodd / Zeven", "pair ε_eff odd / even"};
+    /** Index of the first row that only a pair shows. */
+    private static final int FIRST_PAIR_ROW = 14;
+    private final Label[] cells = new Label[NAMES.length];
+    private final Label[] names = new Label[NAMES.length];
 
     public ReadoutPane(ExplorerModel model) {
         this.model = model;
@@ -43,6 +47,7 @@ public final class ReadoutPane extends VBox {
         for (int i = 0; i < NAMES.length; i++) {
             Label name = new Label(NAMES[i]);
             name.getStyleClass().add("readout-name");
+            names[i] = name;
             cells[i] = new Label();
             cells[i].setId("readout-" + i);
             values.add(name, 0, i);
@@ -130,6 +135,22 @@ public final class ReadoutPane extends VBox {
         };
         for (int i = 0; i < text.length; i++) {
             cells[i].setText(text[i]);
+        }
+        boolean pair = snapshot.design().geometry().isPair();
+        for (int i = FIRST_PAIR_ROW; i < NAMES.length; i++) {
+            names[i].setVisible(pair);
+            names[i].setManaged(pair);
+            cells[i].setVisible(pair);
+            cells[i].setManaged(pair);
+        }
+        if (pair) {
+            PairModes modes = snapshot.design().toPair().modes(f);
+            cells[FIRST_PAIR_ROW].setText(Display.number(modes.differentialImpedanceOhm()) + " Ω  /  "
+                    + Display.number(modes.commonImpedanceOhm()) + " Ω");
+            cells[FIRST_PAIR_ROW + 1].setText(Display.number(modes.oddImpedanceOhm()) + " Ω  /  "
+                    + Display.number(modes.evenImpedanceOhm()) + " Ω");
+            cells[FIRST_PAIR_ROW + 2].setText(Display.number(modes.oddEffectivePermittivity()) + "  /  "
+                    + Display.number(modes.evenEffectivePermittivity()));
         }
     }
 
