@@ -52,14 +52,7 @@ import org.linesweep.io.SweepTable;
 public final class ExplorerWindow {
 
     /** The cautions shown under Help, as in the README. */
-    public static final String CAUTIONS = String.join("\n\n",
-            "LineSweep's results are estimates from closed-form models of idealised geometry. They are not a"
-                    + " substitute for measurement, or for a field solver where the design is critical.",
-            "High voltage, RF exposure and mains wiring can hurt or kill. Nothing here says whether a cable, bus bar"
-                    + " or board is safe for a voltage, a current or a transmitted power: power handling, insulation,"
-                    + " creepage and clearance, heating and exposure limits are your responsibility.",
-            "Follow your local electrical codes, RF-exposure rules and licensed practice; where they apply, the work"
-                    + " belongs to a qualified, licensed person.");
+    public static final String CAUTIONS = String.join("\n\n", org.linesweep.design.ModelNotes.CAUTIONS);
 
     private final ExplorerModel model;
     private final FileDialogs dialogs;
@@ -71,6 +64,7 @@ public final class ExplorerWindow {
     private final ComparePane compare;
     private final org.linesweep.app.view.SensitivityPane sensitivity;
     private final org.linesweep.app.view.TolerancePane tolerance;
+    private final org.linesweep.app.view.WaveformPane waveform;
     private final CrossSectionView crossSection = new CrossSectionView();
     private final Label warnings = new Label();
     private final Label status = new Label();
@@ -91,6 +85,8 @@ public final class ExplorerWindow {
                 java.util.concurrent.ForkJoinPool.commonPool(), javafx.application.Platform::runLater);
         tolerance = new org.linesweep.app.view.TolerancePane(model, plots,
                 java.util.concurrent.ForkJoinPool.commonPool(), javafx.application.Platform::runLater);
+        waveform = new org.linesweep.app.view.WaveformPane(model, java.util.concurrent.ForkJoinPool.commonPool(),
+                javafx.application.Platform::runLater, this::exportWaveform);
         VBox left = new VBox(crossSection, designPanel);
         left.setAlignment(javafx.geometry.Pos.TOP_CENTER);
         designScroll = new ScrollPane(left);
@@ -112,7 +108,10 @@ public final class ExplorerWindow {
         javafx.scene.control.TabPane tools = new javafx.scene.control.TabPane(
                 new javafx.scene.control.Tab("Compare", compare),
                 new javafx.scene.control.Tab("Sensitivity", new ScrollPane(sensitivity)),
-                new javafx.scene.control.Tab("Tolerances", tolerance));
+                new javafx.scene.control.Tab("Tolerances", tolerance),
+                new javafx.scene.control.Tab("Waveform", waveform));
+        tools.getSelectionModel().selectedItemProperty().addListener((o, old, now) ->
+                waveform.setShowing(now != null && now.getContent() == waveform));
         tools.setTabClosingPolicy(javafx.scene.control.TabPane.TabClosingPolicy.UNAVAILABLE);
         tools.setId("tools-tabs");
         SplitPane bottom = new SplitPane(tools, readoutScroll);
@@ -121,6 +120,12 @@ public final class ExplorerWindow {
         SplitPane center = new SplitPane(plots, bottom);
         center.setOrientation(javafx.geometry.Orientation.VERTICAL);
         center.setDividerPositions(0.7);
+        // the time-domain view needs height: give it some when it opens, if the user has not already
+        tools.getSelectionModel().selectedItemProperty().addListener((o, old, now) -> {
+            if (now != null && now.getContent() == waveform && center.getDividerPositions()[0] > 0.6) {
+                center.setDividerPositions(0.56);
+            }
+        });
         root.setTop(top);
         root.setLeft(designScroll);
         root.setCenter(center);
@@ -227,8 +232,11 @@ public final class ExplorerWindow {
                 KeyCombination.SHORTCUT_DOWN), this::exportPng);
         MenuItem exportCsv = item("Export sweep as CSV…", new KeyCodeCombination(KeyCode.E,
                 KeyCombination.SHORTCUT_DOWN, KeyCombination.SHIFT_DOWN), this::exportCsv);
+        MenuItem exportTouchstone = item("Export line as Touchstone (.s2p)…", null, this::exportTouchstone);
+        MenuItem exportReview = item("Export review pack (HTML, plots, tables, .s2p)…", new KeyCodeCombination(
+                KeyCode.R, KeyCombination.SHORTCUT_DOWN, KeyCombination.SHIFT_DOWN), this::exportReviewPack);
         file.getItems().addAll(open, recentMenu, presets, new SeparatorMenuItem(), save, saveAs,
-                new SeparatorMenuItem(), exportPng, exportCsv);
+                new SeparatorMenuItem(), exportPng, exportCsv, exportTouchstone, exportReview);
         Menu edit = new Menu("Edit");
         MenuItem undo = item("Undo", new KeyCodeCombination(KeyCode.Z, KeyCombination.SHORTCUT_DOWN), model::undo);
         MenuItem redo = item("Redo", new KeyCodeCombination(KeyCode.Y, KeyCombination.SHORTCUT_DOWN), model::redo);
@@ -267,18 +275,8 @@ public final class ExplorerWindow {
         return bar;
     }
 
-    private static final String MODELS = String.join("\n",
-            "Coax: F = 2π/ln(b/a); exact round-wire (Bessel) inner and exact tube outer conductor (Schelkunoff 1934);"
-                    + " TE11 from the exact Bessel cross-product root.",
-            "Two-wire and wire over ground: acosh forms (exact for ideal geometry) with the proximity factor faded in"
-                    + " with the skin effect; open lines radiate when the spacing nears λ/10 (not modelled).",
-            "Parallel plate: w/d, fringing neglected (flagged below w/d = 10).",
-            "Microstrip: Hammerstad-Jensen 1980 static Z0 and ε_eff (0.01 ≤ w/h ≤ 100), Kirschning-Jansen 1982 dispersion"
-                    + " (0.1 ≤ w/h, εr ≤ 20, h/λ0 ≤ 0.13); conductor loss by Wheeler's incremental-inductance rule.",
-            "Stripline: Cohn 1954 exact zero-thickness Z0 with Wheeler 1978 thickness ratio (0.5 % for W′/(b − t) < 10).",
-            "Conductors: exact finite-thickness surface impedance for flat conductors; Hammerstad roughness.",
-            "Dielectrics: constant loss tangent (not causal) or wideband Debye (Djordjevic-Sarkar 2001, causal).",
-            "See docs/physics.md for sources and ranges.");
+    private static final String MODELS = String.join("\n", org.linesweep.design.ModelNotes.all())
+            + "\nSee docs/physics.md for sources and ranges.";
 
     private static MenuItem item(String text, KeyCombination accelerator, Runnable action) {
         MenuItem item = new MenuItem(text);
@@ -389,6 +387,79 @@ public final class ExplorerWindow {
             model.report("Exported " + target.getFileName());
         } catch (IOException | RuntimeException e) {
             model.report("Could not export " + target.getFileName() + ": " + e.getMessage());
+        }
+    }
+
+    /** The time-domain view. */
+    public org.linesweep.app.view.WaveformPane waveformPane() {
+        return waveform;
+    }
+
+    /** Reference impedance of exported two-ports. */
+    static final double TOUCHSTONE_REFERENCE_OHM = 50.0;
+
+    /** Exports the live line as a Touchstone two-port on its sweep grid. */
+    public void exportTouchstone() {
+        dialogs.save("Export Touchstone two-port", "s2p", "linesweep-line.s2p").ifPresent(this::exportTouchstone);
+    }
+
+    public void exportTouchstone(Path target) {
+        Design design = model.getDesign();
+        try {
+            org.linesweep.signal.ScatteringSweep sweep = org.linesweep.signal.ScatteringSweep.of(design.toModel(),
+                    design.lengthMetres(), design.sweep().grid().frequencies(), TOUCHSTONE_REFERENCE_OHM);
+            AtomicFiles.write(target, out -> org.linesweep.io.Touchstone.write(sweep,
+                    org.linesweep.io.Touchstone.header(design, TOUCHSTONE_REFERENCE_OHM), out));
+            model.report("Exported " + target.getFileName() + " (reference 50 Ω, " + design.sweep().points()
+                    + " frequencies)");
+        } catch (IOException | RuntimeException e) {
+            model.report("Could not export " + target.getFileName() + ": " + e.getMessage());
+        }
+    }
+
+    private void exportWaveform(org.linesweep.signal.Waveform result) {
+        dialogs.save("Export waveform", "csv", "linesweep-waveform.csv").ifPresent(target -> {
+            try {
+                AtomicFiles.write(target, out -> org.linesweep.io.WaveformTable.writeCsv(result, out));
+                model.report("Exported " + target.getFileName());
+            } catch (IOException | RuntimeException e) {
+                model.report("Could not export " + target.getFileName() + ": " + e.getMessage());
+            }
+        });
+    }
+
+    /** Exports the review pack for the live design and its pins. */
+    public void exportReviewPack() {
+        String name = model.getDesign().name().isEmpty() ? "linesweep" : model.getDesign().name()
+                .toLowerCase(java.util.Locale.ROOT).replaceAll("[^a-z0-9]+", "-").replaceAll("(^-|-$)", "");
+        dialogs.save("Export review pack", "html", name + "-review.html").ifPresent(this::exportReviewPack);
+    }
+
+    public void exportReviewPack(Path target) {
+        SweepSnapshot snapshot = model.snapshotProperty().get();
+        if (snapshot == null) {
+            model.report("Nothing computed yet to export.");
+            return;
+        }
+        try {
+            java.io.ByteArrayOutputStream png = new java.io.ByteArrayOutputStream();
+            ImageIO.write(SwingFXUtils.fromFXImage(snapshotPlots(2.0), null), "png", png);
+            java.util.List<org.linesweep.io.ReviewPack.Entry> pins = new java.util.ArrayList<>();
+            for (org.linesweep.app.model.Pin pin : model.pins()) {
+                pins.add(new org.linesweep.io.ReviewPack.Entry(pin.label(), pin.snapshot().design(),
+                        pin.snapshot().sweep(), pin.snapshot().limits()));
+            }
+            Design design = snapshot.design();
+            org.linesweep.signal.WaveformSettings settings = waveform.settings();
+            org.linesweep.io.ReviewPack.TimeDomainPart timeDomain = new org.linesweep.io.ReviewPack.TimeDomainPart(
+                    settings, settings.simulate(snapshot.model(), design.lengthMetres()));
+            java.util.List<Path> files = org.linesweep.io.ReviewPack.write(target,
+                    new org.linesweep.io.ReviewPack.Entry(design.name().isEmpty() ? "live design" : design.name(),
+                            design, snapshot.sweep(), snapshot.limits()),
+                    pins, png.toByteArray(), timeDomain, TOUCHSTONE_REFERENCE_OHM);
+            model.report("Exported the review pack: " + files.size() + " files beside " + target.getFileName());
+        } catch (IOException | RuntimeException e) {
+            model.report("Could not export the review pack " + target.getFileName() + ": " + e.getMessage());
         }
     }
 }

@@ -15,7 +15,7 @@ import picocli.CommandLine.Spec;
         description = "Transmission-line sweeps against frequency: RLGC, attenuation, velocity, impedance and"
                 + " frequency limits.",
         subcommands = {SweepCommand.class, LimitsCommand.class, SolveCommand.class, ToleranceCommand.class,
-            WaveformCommand.class, TouchstoneCommand.class,
+            WaveformCommand.class, TouchstoneCommand.class, ReviewCommand.class,
             MaterialsCommand.class},
         exitCodeListHeading = "%nExit status:%n",
         exitCodeList = {"0:success", "1:internal error (please report it)", "2:invalid input",
@@ -27,7 +27,7 @@ public final class LineSweepCommand implements Runnable {
 
     @Override
     public void run() {
-        throw new CommandLine.ParameterException(spec.commandLine(), "name a command: sweep, limits, solve, tolerance, waveform, touchstone or materials");
+        throw new CommandLine.ParameterException(spec.commandLine(), "name a command: sweep, limits, solve, tolerance, waveform, touchstone, review or materials");
     }
 
     /**

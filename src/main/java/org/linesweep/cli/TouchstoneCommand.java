@@ -1,11 +1,9 @@
 package org.linesweep.cli;
 
 import java.io.PrintWriter;
-import java.util.List;
 import java.util.concurrent.Callable;
 import org.linesweep.design.Design;
 import org.linesweep.design.Rule;
-import org.linesweep.design.Units;
 import org.linesweep.io.Touchstone;
 import org.linesweep.signal.ScatteringSweep;
 import picocli.CommandLine.Command;
@@ -42,16 +40,7 @@ final class TouchstoneCommand implements Callable<Integer> {
         ScatteringSweep sweep = ScatteringSweep.of(design.toModel(), design.lengthMetres(),
                 design.sweep().grid().frequencies(), reference);
         Output.deliver(CommonOptions.path("--out", out), spec.commandLine().getOut(),
-                stream -> Touchstone.write(sweep, header(design, reference), stream));
+                stream -> Touchstone.write(sweep, Touchstone.header(design, reference), stream));
         return ExitStatus.OK;
-    }
-
-    /** The comment header every exported two-port carries. */
-    static List<String> header(Design design, double reference) {
-        return List.of("LineSweep two-port: " + (design.name().isEmpty() ? "unnamed design" : design.name()),
-                "line: " + design.toModel(),
-                "length: " + Units.engineering(design.lengthMetres(), "m", 6),
-                "reference impedance: " + reference + " ohm at both ports",
-                "model: telegrapher's equations with the design's RLGC; TEM only (see the limits command)");
     }
 }

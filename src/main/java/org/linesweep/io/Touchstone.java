@@ -40,6 +40,15 @@ public final class Touchstone {
     private Touchstone() {
     }
 
+    /** The comment header of an exported line: what it is and how it was modelled. */
+    public static List<String> header(org.linesweep.design.Design design, double referenceOhm) {
+        return List.of("LineSweep two-port: " + (design.name().isEmpty() ? "unnamed design" : design.name()),
+                "line: " + design.toModel(),
+                "length: " + org.linesweep.design.Units.engineering(design.lengthMetres(), "m", 6),
+                "reference impedance: " + referenceOhm + " ohm at both ports",
+                "model: telegrapher's equations with the design's RLGC; TEM only (see the limits command)");
+    }
+
     /**
      * Writes a sweep as a Touchstone 1.1 two-port.
      *

@@ -235,7 +235,7 @@ class CommandLineTest {
     @Test
     void pairSweepAddsTheModeColumns(@TempDir Path folder) throws IOException {
         Path pair = folder.resolve("pair.json");
-        DesignFiles.write(pair, Presets.load("board-trace-50-ohm").withGeometryValue("gap", 0.2e-3));
+        DesignFiles.write(Presets.load("board-trace-50-ohm").withGeometryValue("gap", 0.2e-3), pair);
         Run r = run("sweep", pair.toString(), "--at", "1GHz");
         assertEquals(0, r.status(), r.err());
         String[] lines = r.out().split("\n");

@@ -144,7 +144,7 @@ class DesignFilesTest {
         assertEquals(6 * 25.4e-6, d.geometry().value("gap"), 1e-15);
         Design back = DesignFiles.parse(DesignFiles.toJson(d));
         assertEquals(d.geometry(), back.geometry());
-        assertTrue(!DesignFiles.parse(pair.replace(",\n                            \"gap\": \"6 mil\"", "")).geometry().isPair());
+        assertTrue(!DesignFiles.parse(pair.replaceAll(",\\s*\"gap\": \"6 mil\"", "")).geometry().isPair());
         InvalidInputException onCoax = assertThrows(InvalidInputException.class,
                 () -> DesignFiles.parse(MINIMAL.replace("\"outerThickness\": \"0.25 mm\"",
                         "\"outerThickness\": \"0.25 mm\", \"gap\": \"1 mm\"")));

@@ -93,7 +93,9 @@ public final class CrossSectionView extends Region {
                 double width = geometry.value("width");
                 double sub = geometry.value("height");
                 double t = geometry.value("thickness");
-                double span = Math.max(width * 3, sub * 6);
+                double gap = geometry.isPair() ? geometry.value("gap") : 0;
+                double strips = geometry.isPair() ? 2 * width + gap : width;
+                double span = Math.max(strips * 1.6, Math.max(width * 3, sub * 6));
                 double s = Math.min((w - 16) / span, (h - 30) / (sub + t));
                 double ground = h - 12;
                 g.setFill(METAL);
@@ -101,24 +103,39 @@ public final class CrossSectionView extends Region {
                 g.setFill(DIELECTRIC);
                 g.fillRect(8, ground - sub * s, w - 16, sub * s);
                 g.setFill(METAL);
-                g.fillRect(cx - width / 2 * s, ground - (sub + t) * s, width * s, Math.max(t * s, 1.5));
+                stripOrPair(g, cx, ground - (sub + t) * s, width, gap, geometry.isPair(), t, s);
             }
             case STRIPLINE -> {
                 double width = geometry.value("width");
                 double b = geometry.value("spacing");
                 double t = geometry.value("thickness");
-                double span = Math.max(width * 3, b * 3);
+                double gap = geometry.isPair() ? geometry.value("gap") : 0;
+                double strips = geometry.isPair() ? 2 * width + gap : width;
+                double span = Math.max(strips * 1.6, Math.max(width * 3, b * 3));
                 double s = Math.min((w - 16) / span, (h - 24) / b);
                 g.setFill(DIELECTRIC);
                 g.fillRect(8, cy - b / 2 * s, w - 16, b * s);
                 g.setFill(METAL);
                 g.fillRect(8, cy - b / 2 * s - 5, w - 16, 5);
                 g.fillRect(8, cy + b / 2 * s, w - 16, 5);
-                g.fillRect(cx - width / 2 * s, cy - t / 2 * s, width * s, Math.max(t * s, 1.5));
+                stripOrPair(g, cx, cy - t / 2 * s, width, gap, geometry.isPair(), t, s);
             }
         }
         g.setFill(OUTLINE);
         g.fillText("to scale", 6, 12);
+    }
+
+    /** One strip centred on cx, or a pair of them a gap apart, top edge at y. */
+    private static void stripOrPair(GraphicsContext g, double cx, double y, double width, double gap, boolean pair,
+            double thickness, double scale) {
+        double height = Math.max(thickness * scale, 1.5);
+        if (!pair) {
+            g.fillRect(cx - width / 2 * scale, y, width * scale, height);
+            return;
+        }
+        double gapPixels = Math.max(gap * scale, 1.0);
+        g.fillRect(cx - gapPixels / 2 - width * scale, y, width * scale, height);
+        g.fillRect(cx + gapPixels / 2, y, width * scale, height);
     }
 
     private static void disc(GraphicsContext g, double x, double y, double r, Color fill) {

@@ -46,6 +46,8 @@ public final class FrequencyPlot extends Region {
     private Scale yScale = Scale.LINEAR;
     private Scale rightScale = Scale.LINEAR;
     private double minHz = 1e3;
+    private String horizontalUnit = "Hz";
+    private Scale horizontalScale = Scale.LOG;
     private double maxHz = 1e9;
     private List<PlotSeries> series = List.of();
     private List<PlotMarker> markers = List.of();
@@ -102,6 +104,18 @@ public final class FrequencyPlot extends Region {
         if (minHz != this.minHz || maxHz != this.maxHz) {
             this.minHz = minHz;
             this.maxHz = maxHz;
+            markBackground();
+        }
+    }
+
+    /**
+     * The horizontal axis: frequency on a log scale unless set otherwise (the time-domain view uses the same
+     * component with seconds on a linear scale). The "frequency" methods then speak of that quantity.
+     */
+    public void setHorizontalAxis(String unit, Scale scale) {
+        if (!unit.equals(horizontalUnit) || scale != horizontalScale) {
+            horizontalUnit = unit;
+            horizontalScale = scale;
             markBackground();
         }
     }
@@ -219,11 +233,17 @@ public final class FrequencyPlot extends Region {
     /** Frequency at a horizontal position in this node's coordinates. */
     public double frequencyAt(double x) {
         double fraction = (x - LEFT) / plotWidth();
+        if (horizontalScale == Scale.LINEAR) {
+            return minHz + fraction * (maxHz - minHz);
+        }
         return Math.pow(10, Math.log10(minHz) + fraction * (Math.log10(maxHz) - Math.log10(minHz)));
     }
 
     /** Horizontal position of a frequency in this node's coordinates. */
     public double xOf(double frequencyHz) {
+        if (horizontalScale == Scale.LINEAR) {
+            return LEFT + (frequencyHz - minHz) / (maxHz - minHz) * plotWidth();
+        }
         return LEFT + (Math.log10(frequencyHz) - Math.log10(minHz)) / (Math.log10(maxHz) - Math.log10(minHz))
                 * plotWidth();
     }
@@ -354,7 +374,9 @@ public final class FrequencyPlot extends Region {
         g.setFont(font(0.9, false));
         g.setTextBaseline(VPos.TOP);
         g.setTextAlign(TextAlignment.CENTER);
-        for (AxisTicks.Tick tick : AxisTicks.log(minHz, maxHz, "Hz")) {
+        List<AxisTicks.Tick> horizontalTicks = horizontalScale == Scale.LINEAR
+                ? AxisTicks.linear(minHz, maxHz, horizontalUnit, Math.max(3, (int) (plotWidth() / 95))) : AxisTicks.log(minHz, maxHz, horizontalUnit);
+        for (AxisTicks.Tick tick : horizontalTicks) {
             double x = Math.round(xOf(tick.value())) + 0.5;
             g.setStroke(tick.major() ? grid : grid.interpolate(paper, 0.55));
             g.strokeLine(x, TOP, x, bottom);

@@ -359,7 +359,11 @@ public final class PlotsPane extends GridPane {
                 }
             }
         }
-        impedance.setTitle(s.isPair() ? "Impedance: Z0 of one strip, pair Zdiff and Zcommon" : "Impedance Z0");
+        if (s.isPair() && impedanceForm.getValue() != ImpedanceForm.REAL_IMAGINARY) {
+            // Zcommon, Z0 and Zdiff span about a factor of four: a linear axis labels all three
+            impedance.setLeftAxis("Ω", FrequencyPlot.Scale.LINEAR);
+        }
+        impedance.setTitle(s.isPair() ? "Impedance (pair)" : "Impedance Z0");
         impedance.setSeries(series);
     }
 
