@@ -124,6 +124,7 @@ public final class ExplorerWindow {
         tools.getSelectionModel().selectedItemProperty().addListener((o, old, now) -> {
             if (now != null && now.getContent() == waveform && center.getDividerPositions()[0] > 0.6) {
                 center.setDividerPositions(0.56);
+                bottom.setDividerPositions(Math.max(bottom.getDividerPositions()[0], 0.7));
             }
         });
         root.setTop(top);

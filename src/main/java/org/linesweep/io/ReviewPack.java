@@ -132,9 +132,16 @@ public final class ReviewPack {
         for (int i = 0; i < entries.size(); i++) {
             Design d = entries.get(i).design();
             put(rows, "line type", i, entries.size(), d.geometry().type().key() + (d.geometry().isPair() ? " pair" : ""));
+        }
+        // every design's geometry rows before the rest, so a pin's extra field (a pair's gap) sits with them
+        for (int i = 0; i < entries.size(); i++) {
+            Design d = entries.get(i).design();
             for (GeometryField field : d.geometry().fields()) {
                 put(rows, field.label(), i, entries.size(), Units.engineering(d.geometry().value(field.name()), "m", 4));
             }
+        }
+        for (int i = 0; i < entries.size(); i++) {
+            Design d = entries.get(i).design();
             put(rows, "length", i, entries.size(), Units.engineering(d.lengthMetres(), "m", 4));
             put(rows, "conductor", i, entries.size(), d.conductor().materialKey() == null
                     ? String.format(Locale.ROOT, "custom, %.4g S/m", d.conductor().conductivitySiemensPerMetre())
@@ -288,7 +295,11 @@ public final class ReviewPack {
             }
         }
         out.println("<h2>Models used</h2><ul>");
-        for (String note : ModelNotes.forType(design.geometry().type(), design.geometry().isPair())) {
+        java.util.Set<String> notes = new java.util.LinkedHashSet<>();
+        for (Entry e : entries) {
+            notes.addAll(ModelNotes.forType(e.design().geometry().type(), e.design().geometry().isPair()));
+        }
+        for (String note : notes) {
             out.println("<li>" + escape(note) + "</li>");
         }
         out.println("</ul><p class=\"small\">Touchstone files: S-parameters of the line alone, reference "

@@ -253,4 +253,17 @@ class CommandLineTest {
         assertEquals(2, single.status());
         assertTrue(single.err().contains("line.gap"), single.err());
     }
+
+    @Test
+    void reviewPackWithoutTheWindow(@TempDir Path folder) throws IOException {
+        Path html = folder.resolve("trace-review.html");
+        Run r = run("review", preset("board-trace-50-ohm"), "--pin", preset("bench-patch-lead"), "--out", html.toString());
+        assertEquals(0, r.status(), r.err());
+        assertTrue(r.out().startsWith(html.toString()), r.out());
+        assertTrue(Files.readString(html).contains("Plots: not included"));
+        assertTrue(Files.exists(folder.resolve("trace-review-pin1.s2p")));
+        Run missing = run("review", preset("board-trace-50-ohm"), "--out", folder.resolve("no/such/folder/x.html").toString());
+        assertEquals(4, missing.status(), missing.err());
+        assertTrue(missing.err().contains("the folder does not exist"), missing.err());
+    }
 }
