@@ -21,23 +21,28 @@ public final class BenchReport {
     }
 
     public static void main(String[] args) throws RunnerException {
-        String include = args.length > 0 ? args[0] : SweepBenchmark.class.getSimpleName();
+        String include = args.length > 0 ? args[0]
+                : SweepBenchmark.class.getSimpleName() + "|" + SignalBenchmark.class.getSimpleName();
         Options options = new OptionsBuilder().include(include).build();
         Collection<RunResult> results = new Runner(options).run();
         Map<String, Double> sweep = new HashMap<>();
         Map<String, Double> floor = new HashMap<>();
         Map<String, Double> limits = new HashMap<>();
         Map<String, Double> change = new HashMap<>();
+        Map<String, Double> tolerance = new HashMap<>();
+        Map<String, Double> waveform = new HashMap<>();
         for (RunResult result : results) {
             String type = result.getParams().getParam("type");
             String method = result.getParams().getBenchmark();
-            double microseconds = result.getPrimaryResult().getScore();
+            double score = result.getPrimaryResult().getScore(); // in the benchmark's own time unit
             String name = method.substring(method.lastIndexOf('.') + 1);
             switch (name) {
-                case "sweep" -> sweep.put(type, microseconds);
-                case "floor" -> floor.put(type, microseconds);
-                case "limits" -> limits.put(type, microseconds);
-                case "designChange" -> change.put(type, microseconds);
+                case "sweep" -> sweep.put(type, score);
+                case "floor" -> floor.put(type, score);
+                case "limits" -> limits.put(type, score);
+                case "designChange" -> change.put(type, score);
+                case "tolerance" -> tolerance.put(type, score); // milliseconds
+                case "waveform" -> waveform.put(type, score);
                 default -> { }
             }
         }
@@ -61,6 +66,14 @@ public final class BenchReport {
         for (String type : change.keySet()) {
             System.out.printf(Locale.ROOT, "RESULT design-change type=%s points=%d ms=%.3f%n",
                     type.toLowerCase(Locale.ROOT).replace('_', '-'), SweepBenchmark.POINTS, change.get(type) / 1000);
+        }
+        for (String type : tolerance.keySet()) {
+            System.out.printf(Locale.ROOT, "RESULT tolerance type=%s samples=%d ms=%.1f%n",
+                    type.toLowerCase(Locale.ROOT).replace('_', '-'), SignalBenchmark.SAMPLES, tolerance.get(type));
+        }
+        for (String type : waveform.keySet()) {
+            System.out.printf(Locale.ROOT, "RESULT waveform type=%s ms=%.2f%n",
+                    type.toLowerCase(Locale.ROOT).replace('_', '-'), waveform.get(type));
         }
     }
 }

@@ -16,7 +16,8 @@ import org.linesweep.physics.LineModel;
 import org.linesweep.physics.LinePoint;
 
 /**
- * How much |Z0|, attenuation, phase velocity and the frequency ceiling move when each input moves: the
+ * How much |Z0|, attenuation, phase velocity, the frequency ceiling and a pair's differential impedance move
+ * when each input moves: the
  * change for −x % and +x % of the input (temperature: ∓ and ± kelvin), both shown because the response need
  * not be symmetric, and the local elasticity d ln Q / d ln X (per kelvin, relative, for temperature) from
  * Commons Math's five-point finite-difference differentiator on ln X with a step of 1e-3 (truncation of order
@@ -26,7 +27,9 @@ public final class Sensitivity {
 
     /** The quantities watched. */
     public enum Quantity {
-        Z0("|Z0|"), ATTENUATION("attenuation"), PHASE_VELOCITY("phase velocity"), CEILING("ceiling");
+        Z0("|Z0|"), ATTENUATION("attenuation"), PHASE_VELOCITY("phase velocity"), CEILING("ceiling"),
+        /** Differential impedance of a pair; NaN for a single line. */
+        DIFFERENTIAL_IMPEDANCE("Zdiff");
 
         private final String label;
 
@@ -114,7 +117,9 @@ public final class Sensitivity {
                 try {
                     return quantities(input.set().apply(design, v), frequencyHz);
                 } catch (InvalidInputException e) {
-                    return new double[] {Double.NaN, Double.NaN, Double.NaN, Double.NaN};
+                    double[] none = new double[Quantity.values().length];
+                    java.util.Arrays.fill(none, Double.NaN);
+                    return none;
                 }
             });
             double low = input.kelvin() ? x0 - kelvin : x0 * (1 - percent / 100);
@@ -131,14 +136,16 @@ public final class Sensitivity {
         return rows;
     }
 
-    /** |Z0|, α (dB/m), v_p and the ceiling at a frequency. */
+    /** |Z0|, α (dB/m), v_p, the ceiling and (for a pair) Zdiff at a frequency. */
     static double[] quantities(Design design, double frequencyHz) {
         LineModel model = design.toModel();
         LinePoint p = model.at(frequencyHz);
         FrequencyLimits limits = LimitFinder.find(model, design.lengthMetres(), design.threshold(),
                 design.lossBudgetDb());
+        double differential = design.geometry().isPair()
+                ? design.toPair().modes(frequencyHz).differentialImpedanceOhm() : Double.NaN;
         return new double[] {p.z0MagnitudeOhm(), p.alphaDbPerMetre(), p.phaseVelocityMetresPerSecond(),
-            limits.ceilingHz()};
+            limits.ceilingHz(), differential};
     }
 
     private static double[] relative(double[] changed, double[] base) {

@@ -21,7 +21,8 @@ public final class Presets {
             "buried-clock-stripline",
             "ladder-line-feeder",
             "test-fixture-wire-over-plane",
-            "air-line-reference");
+            "air-line-reference",
+            "camera-link-pair");
 
     /** The preset the explorer opens on. */
     public static final String DEFAULT = "bench-patch-lead";

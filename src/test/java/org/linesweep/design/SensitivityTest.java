@@ -67,4 +67,25 @@ class SensitivityTest {
         // hotter copper conducts worse: more loss
         assertTrue(row(rows, "temperature").plus()[Sensitivity.Quantity.ATTENUATION.ordinal()] > 0);
     }
+
+    /**
+     * A stripline pair's Zdiff against Cohn's exact formulas: widening the gap raises Zdiff (the odd mode
+     * decouples), widening the strips lowers it, and its elasticity matches a direct central difference.
+     */
+    @Test
+    void pairDifferentialImpedance() {
+        Design pair = org.linesweep.io.Presets.load("buried-clock-stripline").withGeometryValue("gap", 0.15e-3);
+        List<Sensitivity.Row> rows = Sensitivity.analyse(pair, 1e9, 5, 10, Sensitivity.Quantity.DIFFERENTIAL_IMPEDANCE);
+        int zdiff = Sensitivity.Quantity.DIFFERENTIAL_IMPEDANCE.ordinal();
+        assertTrue(row(rows, "line.gap").plus()[zdiff] > 0);
+        assertTrue(row(rows, "line.width").plus()[zdiff] < 0);
+        double h = 1e-4;
+        double up = pair.withGeometryValue("gap", 0.15e-3 * Math.exp(h)).toPair().modes(1e9).differentialImpedanceOhm();
+        double down = pair.withGeometryValue("gap", 0.15e-3 * Math.exp(-h)).toPair().modes(1e9).differentialImpedanceOhm();
+        assertEquals((Math.log(up) - Math.log(down)) / (2 * h), row(rows, "line.gap").elasticity()[zdiff], 1e-6);
+        // a single line has no Zdiff
+        List<Sensitivity.Row> single = Sensitivity.analyse(org.linesweep.io.Presets.load("buried-clock-stripline"), 1e9,
+                5, 10, Sensitivity.Quantity.Z0);
+        assertTrue(Double.isNaN(single.get(0).plus()[zdiff]));
+    }
 }

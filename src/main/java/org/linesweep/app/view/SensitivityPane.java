@@ -39,6 +39,8 @@ public final class SensitivityPane extends VBox {
     private final Executor fx;
     private final TextField percent = new TextField("5");
     private final TextField kelvin = new TextField("10");
+    /** Shown only when the analysed design is a pair. */
+    private TableColumn<Sensitivity.Row, String> differentialColumn;
     private final ChoiceBox<Sensitivity.Quantity> rankBy =
             new ChoiceBox<>(FXCollections.observableArrayList(Sensitivity.Quantity.values()));
     private final Button analyse = new Button("Analyse at read-out frequency");
@@ -86,6 +88,10 @@ public final class SensitivityPane extends VBox {
             column.setCellValueFactory(c -> new ReadOnlyStringWrapper(String.format(Locale.ROOT, "%s / %s",
                     percentText(c.getValue().minus()[q.ordinal()]), percentText(c.getValue().plus()[q.ordinal()]))));
             table.getColumns().add(column);
+            if (q == Sensitivity.Quantity.DIFFERENTIAL_IMPEDANCE) {
+                differentialColumn = column;
+                column.setVisible(false);
+            }
         }
         TableColumn<Sensitivity.Row, String> elasticity = new TableColumn<>("d ln Q/d ln X");
         elasticity.setCellValueFactory(c -> new ReadOnlyStringWrapper(String.format(Locale.ROOT, "%.3g",
@@ -125,6 +131,7 @@ public final class SensitivityPane extends VBox {
             return;
         }
         Design design = model.getDesign();
+        differentialColumn.setVisible(design.geometry().isPair());
         double f = model.crosshairHzProperty().get();
         double frequency = Double.isNaN(f)
                 ? Math.sqrt(design.sweep().fromHz() * design.sweep().toHz()) : f;
