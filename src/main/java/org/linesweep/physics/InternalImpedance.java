@@ -27,6 +27,9 @@ public final class InternalImpedance {
         if (radiusOverSkinDepth == 0.0) {
             return Complex.ONE;
         }
+        if (RoundWireTable.TABLE.covers(radiusOverSkinDepth)) {
+            return roundWireRatioWithSlope(radiusOverSkinDepth)[0];
+        }
         Complex z = ONE_PLUS_J.multiply(radiusOverSkinDepth);
         return z.multiply(0.5).multiply(SpecialFunctions.besselIRatio(z));
     }
@@ -38,6 +41,41 @@ public final class InternalImpedance {
      * @return {Z/R_dc, d(Z/R_dc)/d(a/δ)}
      */
     public static Complex[] roundWireRatioWithSlope(double radiusOverSkinDepth) {
+        if (radiusOverSkinDepth == 0.0) {
+            return new Complex[] {Complex.ONE, Complex.ZERO};
+        }
+        if (RoundWireTable.TABLE.covers(radiusOverSkinDepth)) {
+            double[] out = new double[4];
+            RoundWireTable.TABLE.evaluate(radiusOverSkinDepth, out);
+            return new Complex[] {new Complex(out[0], out[1]), new Complex(out[2], out[3])};
+        }
+        return exactRoundWireRatioWithSlope(radiusOverSkinDepth);
+    }
+
+    /**
+     * The round wire's Z/R_dc and slope depend on a/δ alone, so one table serves every wire of every design:
+     * {@link #ROUND_WIRE_TABLE_NODES_PER_UNIT_LOG} nodes per unit of ln(a/δ) from a/δ = 0.01 (below it the
+     * series needs two terms) to 1000 (far into the asymptotic regime), built once on first use (about
+     * 3,000 exact evaluations, about a millisecond).
+     */
+    static final int ROUND_WIRE_TABLE_NODES_PER_UNIT_LOG = 256;
+
+    /** Holder: built on first use, by the class loader's lock. */
+    static final class RoundWireTable {
+        static final HermiteTable TABLE = new HermiteTable((x, out) -> {
+            Complex[] exact = exactRoundWireRatioWithSlope(x);
+            out[0] = exact[0].getReal();
+            out[1] = exact[0].getImaginary();
+            out[2] = exact[1].getReal();
+            out[3] = exact[1].getImaginary();
+        }, 0.01, 1000.0, ROUND_WIRE_TABLE_NODES_PER_UNIT_LOG);
+
+        private RoundWireTable() {
+        }
+    }
+
+    /** The exact round-wire Z/R_dc and its slope from the Bessel functions (what the table is built from). */
+    static Complex[] exactRoundWireRatioWithSlope(double radiusOverSkinDepth) {
         if (radiusOverSkinDepth == 0.0) {
             return new Complex[] {Complex.ONE, Complex.ZERO};
         }
@@ -118,6 +156,15 @@ public final class InternalImpedance {
     /** The tube's internal impedance per metre and its derivative with respect to ω. */
     public static Complex[] tubeWithSlope(Conductor conductor, double innerRadiusMetres, double outerRadiusMetres,
             double frequencyHz) {
+        return tubeWithSlope(conductor, innerRadiusMetres, outerRadiusMetres, frequencyHz, null);
+    }
+
+    /**
+     * The tube's internal impedance and slope, reading Z/R_dc from a table of this tube's c/b where it covers
+     * b/δ (see {@link #tubeTable}).
+     */
+    static Complex[] tubeWithSlope(Conductor conductor, double innerRadiusMetres, double outerRadiusMetres,
+            double frequencyHz, HermiteTable table) {
         if (conductor.isPerfect()) {
             return new Complex[] {Complex.ZERO, Complex.ZERO};
         }
@@ -125,8 +172,59 @@ public final class InternalImpedance {
         double dcResistance = 1.0 / (sigma * Math.PI
                 * (outerRadiusMetres - innerRadiusMetres) * (outerRadiusMetres + innerRadiusMetres));
         double x = innerRadiusMetres / conductor.skinDepthMetres(frequencyHz);
-        return scaleWithSlope(conductor, dcResistance, tubeRatioWithSlope(x, outerRadiusMetres / innerRadiusMetres),
-                x, frequencyHz);
+        Complex[] ratio;
+        if (table != null && table.covers(x)) {
+            double[] out = new double[4];
+            table.evaluate(x, out);
+            ratio = new Complex[] {new Complex(out[0], out[1]), new Complex(out[2], out[3])};
+        } else {
+            ratio = tubeRatioWithSlope(x, outerRadiusMetres / innerRadiusMetres);
+        }
+        return scaleWithSlope(conductor, dcResistance, ratio, x, frequencyHz);
+    }
+
+    /** Nodes per unit of ln(b/δ) in a tube table. */
+    static final int TUBE_TABLE_NODES_PER_UNIT_LOG = 128;
+
+    /** Recently built tube tables by c/b: a drag of anything but the outer conductor keeps c/b and b/δ. */
+    private static final java.util.Map<Double, HermiteTable> RECENT_TUBE_TABLES =
+            new java.util.LinkedHashMap<>(8, 0.75f, true) {
+                private static final long serialVersionUID = 1L;
+
+                @Override
+                protected boolean removeEldestEntry(java.util.Map.Entry<Double, HermiteTable> eldest) {
+                    return size() > 8;
+                }
+            };
+
+    /** A tube table for c/b covering [xMin, xMax]: a recent one if it covers the range, else a new one. */
+    static HermiteTable sharedTubeTable(double outerOverInnerRadius, double xMin, double xMax) {
+        synchronized (RECENT_TUBE_TABLES) {
+            HermiteTable recent = RECENT_TUBE_TABLES.get(outerOverInnerRadius);
+            if (recent != null && recent.covers(xMin) && recent.covers(xMax)) {
+                return recent;
+            }
+        }
+        HermiteTable built = tubeTable(outerOverInnerRadius, xMin, xMax);
+        synchronized (RECENT_TUBE_TABLES) {
+            RECENT_TUBE_TABLES.put(outerOverInnerRadius, built);
+        }
+        return built;
+    }
+
+    /**
+     * A table of the tube's full (thin-wall) Z/R_dc for one c/b over [xMin, xMax] of b/δ. Each node costs one
+     * exact evaluation (four complex Bessel functions), so a table pays only when a sweep has several points
+     * per node in its range; the caller decides.
+     */
+    static HermiteTable tubeTable(double outerOverInnerRadius, double xMin, double xMax) {
+        return new HermiteTable((x, out) -> {
+            Complex[] exact = tubeRatioWithSlope(x, outerOverInnerRadius);
+            out[0] = exact[0].getReal();
+            out[1] = exact[0].getImaginary();
+            out[2] = exact[1].getReal();
+            out[3] = exact[1].getImaginary();
+        }, xMin, xMax, TUBE_TABLE_NODES_PER_UNIT_LOG);
     }
 
     /**

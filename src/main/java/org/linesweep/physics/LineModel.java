@@ -63,6 +63,17 @@ public abstract class LineModel {
     }
 
     /**
+     * Told by the sweep engine which frequencies are about to be evaluated, so a line type may tabulate an
+     * expensive part of its model over just that range when that costs less than evaluating it exactly at
+     * each point. The default does nothing. Results stay within the tables' stated accuracy of the exact
+     * model (see {@code HermiteTable}); safe to call from any thread.
+     *
+     * @param count number of frequencies of {@code frequenciesHz} to be used
+     */
+    public void prepareForSweep(double[] frequenciesHz, int count) {
+    }
+
+    /**
      * Radius (round conductor) or half-thickness (flat conductor) of the conductor whose skin effect
      * characterises the line: the coax inner, one wire, one plate or the strip.
      */

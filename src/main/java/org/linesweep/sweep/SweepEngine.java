@@ -60,6 +60,7 @@ public final class SweepEngine {
     public SweepResult run(LineModel model, double[] frequenciesHz, int count, double lengthMetres, SweepResult reuse) {
         reuse.prepare(count, lengthMetres);
         reuse.preparePair(false);
+        model.prepareForSweep(frequenciesHz, count);
         for (int i = 0; i < count; i++) {
             double f = frequenciesHz[i];
             model.evaluateWithSlopes(f, scratch);

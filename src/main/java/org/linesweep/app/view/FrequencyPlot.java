@@ -65,6 +65,8 @@ public final class FrequencyPlot extends Region {
     private DoubleConsumer onHover = f -> { };
     private int drawCount;
     private boolean decimation = true;
+    /** Drops decimated points within a tenth of a pixel of the drawn segment (invisible, and cheaper to draw). */
+    private final PathSimplifier path = new PathSimplifier(0.1);
 
     public FrequencyPlot() {
         getChildren().addAll(background, foreground, crosshair);
@@ -583,6 +585,7 @@ public final class FrequencyPlot extends Region {
             g.stroke();
             return;
         }
+        path.start(g);
         int column = Integer.MIN_VALUE;
         double firstY = 0;
         double lastY = 0;
@@ -600,14 +603,14 @@ public final class FrequencyPlot extends Region {
                 double first = minIndex <= maxIndex ? minY : maxY;
                 double second = minIndex <= maxIndex ? maxY : minY;
                 if (penDown) {
-                    g.lineTo(columnX, firstY);
+                    path.lineTo(columnX, firstY);
                 } else {
-                    g.moveTo(columnX, firstY);
+                    path.moveTo(columnX, firstY);
                     penDown = true;
                 }
-                g.lineTo(columnX, first);
-                g.lineTo(columnX, second);
-                g.lineTo(columnX, lastY);
+                path.lineTo(columnX, first);
+                path.lineTo(columnX, second);
+                path.lineTo(columnX, lastY);
             }
             if (!valid) {
                 if (i < s.count()) {
@@ -636,6 +639,7 @@ public final class FrequencyPlot extends Region {
             }
             lastY = y;
         }
+        path.flush();
         g.stroke();
     }
 
