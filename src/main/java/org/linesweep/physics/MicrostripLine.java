@@ -88,6 +88,53 @@ public final class MicrostripLine extends LineModel {
 
     @Override
     public void evaluate(double frequencyHz, LineParameters out) {
+        double[] dielectricPart = new double[3];
+        double effective = dielectricPart(frequencyHz, dielectricPart);
+        Complex internal = conductorImpedance(frequencyHz);
+        double omega = 2 * Math.PI * frequencyHz;
+        out.set(internal.getReal(), dielectricPart[0] + internal.getImaginary() / omega, dielectricPart[2],
+                dielectricPart[1], effective);
+    }
+
+    /**
+     * The parameters and their ω-derivatives. The conductor part has a closed-form derivative (the surface
+     * impedance's, with the roughness factor's); the rest (Hammerstad-Jensen at ε′(f), Kirschning-Jansen
+     * dispersion, the filling factor) is a chain of closed forms in f and ε′(f) without one, so it alone is
+     * differentiated numerically, by the same central difference the default uses. That part is a few
+     * elementary functions, a fraction of the surface impedance's cost.
+     */
+    @Override
+    public void evaluateWithSlopes(double frequencyHz, LineParameters out) {
+        double step = GROUP_VELOCITY_STEP * frequencyHz;
+        double[] here = new double[3];
+        double[] above = new double[3];
+        double[] below = new double[3];
+        double effective = dielectricPart(frequencyHz, here);
+        dielectricPart(frequencyHz + step, above);
+        dielectricPart(frequencyHz - step, below);
+        double span = 2 * Math.PI * 2 * step;
+        double weight = (stripDerivativeOhmPerMetre + groundDerivativeOhmPerMetre)
+                / PhysicalConstants.FREE_SPACE_IMPEDANCE_OHM;
+        Complex[] surface = InternalImpedance.flatSurfaceWithSlope(conductor, thicknessMetres, frequencyHz);
+        double omega = 2 * Math.PI * frequencyHz;
+        double internalRe = surface[0].getReal() * weight;
+        double internalIm = surface[0].getImaginary() * weight;
+        double internalReSlope = surface[1].getReal() * weight;
+        double internalImSlope = surface[1].getImaginary() * weight;
+        out.set(internalRe, here[0] + internalIm / omega, here[2], here[1], effective);
+        // d(X/ω)/dω = (X′·ω − X)/ω²
+        out.setSlopes(internalReSlope, (above[0] - below[0]) / span + (internalImSlope * omega - internalIm) / (omega * omega),
+                (above[2] - below[2]) / span, (above[1] - below[1]) / span);
+    }
+
+    /**
+     * Everything but the conductors at f: L'_ext, C' and G' from the quasi-static Z0, the dispersive ε_eff and
+     * the filling-factor dielectric loss.
+     *
+     * @param out receives {L'_ext (H/m), C' (F/m), G' (S/m)}
+     * @return ε_eff(f)
+     */
+    private double dielectricPart(double frequencyHz, double[] out) {
         double omega = 2 * Math.PI * frequencyHz;
         double relativePermittivity = permittivity.real(frequencyHz);
         double[] statics = staticImpedanceAndPermittivity(frequencyHz);
@@ -100,12 +147,10 @@ public final class MicrostripLine extends LineModel {
                 ? (effective - 1.0) / (relativePermittivity - 1.0) : 1.0;
         double alphaDielectric = (omega / c) * relativePermittivity * fillingFactor
                 * permittivity.effectiveLossTangent(frequencyHz) / (2.0 * rootEffective);
-        Complex internal = conductorImpedance(frequencyHz);
-        out.set(internal.getReal(),
-                z0 * rootEffective / c + internal.getImaginary() / omega,
-                2.0 * alphaDielectric / z0,
-                rootEffective / (z0 * c),
-                effective);
+        out[0] = z0 * rootEffective / c;
+        out[1] = rootEffective / (z0 * c);
+        out[2] = 2.0 * alphaDielectric / z0;
+        return effective;
     }
 
     @Override
