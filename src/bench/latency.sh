@@ -26,8 +26,10 @@ for points in 2000 10000; do
   summary+=("RESULT points=$points plots=4 fx_p50_ms=$(field "$explorer" fx_p50_ms) total_p50_ms=$(field "$explorer" total_p50_ms) total_p95_ms=$(field "$explorer" total_p95_ms) baseline_fx_p50_ms=$(field "$baseline" fx_p50_ms) baseline_total_p50_ms=$(field "$baseline" total_p50_ms) baseline_total_p95_ms=$(field "$baseline" total_p95_ms)")
 done
 starts=()
+# a fresh settings folder each run: an autosave left by earlier use would open the restore dialog and stall
 for i in 1 2 3 4 5; do
-  line=$(xvfb-run -a -s "-screen 0 1600x1000x24" java -Dlinesweep.reportStartup=true -jar target/linesweep.jar 2>/dev/null | grep '^STARTUP')
+  line=$(XDG_CONFIG_HOME=$(mktemp -d) xvfb-run -a -s "-screen 0 1600x1000x24" java -Dlinesweep.reportStartup=true \
+    -jar target/linesweep.jar 2>/dev/null | grep '^STARTUP')
   starts+=("$(sed -n 's/.*first_curves_ms=\([0-9]*\).*/\1/p' <<<"$line")")
 done
 echo "STARTUP runs_ms=${starts[*]} median_ms=$(printf '%s\n' "${starts[@]}" | sort -n | sed -n 3p)"
