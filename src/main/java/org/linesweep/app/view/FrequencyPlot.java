@@ -67,6 +67,8 @@ public final class FrequencyPlot extends Region {
     private boolean decimation = true;
     /** Drops decimated points within a tenth of a pixel of the drawn segment (invisible, and cheaper to draw). */
     private final PathSimplifier path = new PathSimplifier(0.1);
+    /** A decimated column whose values span less than this is drawn as one point at its middle. */
+    static final double FLAT_COLUMN_PIXELS = 0.2;
 
     public FrequencyPlot() {
         getChildren().addAll(background, foreground, crosshair);
@@ -599,18 +601,29 @@ public final class FrequencyPlot extends Region {
             double x = valid ? xOf(xs[i]) : 0;
             int c = valid ? (int) Math.floor(x) : Integer.MIN_VALUE;
             if (c != column && column != Integer.MIN_VALUE) {
-                // flush the finished column: first, extremes in their order, last
-                double first = minIndex <= maxIndex ? minY : maxY;
-                double second = minIndex <= maxIndex ? maxY : minY;
-                if (penDown) {
-                    path.lineTo(columnX, firstY);
+                // flush the finished column: first, extremes in their order, last; a column whose points all
+                // lie within a fifth of a pixel is one point (the usual case on a smooth curve)
+                if (maxY - minY <= FLAT_COLUMN_PIXELS) {
+                    double middle = 0.5 * (minY + maxY);
+                    if (penDown) {
+                        path.lineTo(columnX, middle);
+                    } else {
+                        path.moveTo(columnX, middle);
+                        penDown = true;
+                    }
                 } else {
-                    path.moveTo(columnX, firstY);
-                    penDown = true;
+                    double first = minIndex <= maxIndex ? minY : maxY;
+                    double second = minIndex <= maxIndex ? maxY : minY;
+                    if (penDown) {
+                        path.lineTo(columnX, firstY);
+                    } else {
+                        path.moveTo(columnX, firstY);
+                        penDown = true;
+                    }
+                    path.lineTo(columnX, first);
+                    path.lineTo(columnX, second);
+                    path.lineTo(columnX, lastY);
                 }
-                path.lineTo(columnX, first);
-                path.lineTo(columnX, second);
-                path.lineTo(columnX, lastY);
             }
             if (!valid) {
                 if (i < s.count()) {

@@ -16,7 +16,7 @@ import javafx.scene.canvas.GraphicsContext;
 final class PathSimplifier {
 
     /** Points folded into one segment at most. */
-    static final int MAX_SKIPPED = 32;
+    static final int MAX_SKIPPED = 16;
 
     private final double toleranceSquared;
     private final double[] xs = new double[MAX_SKIPPED + 1];
