@@ -10,9 +10,6 @@ import org.linesweep.design.Design;
 import org.linesweep.design.Rule;
 import org.linesweep.io.DesignFiles;
 import org.linesweep.io.ReviewPack;
-import org.linesweep.physics.LimitFinder;
-import org.linesweep.physics.LineModel;
-import org.linesweep.sweep.SweepEngine;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Model.CommandSpec;
@@ -57,11 +54,11 @@ final class ReviewCommand implements Callable<Integer> {
         List<ReviewPack.Entry> pinned = new ArrayList<>();
         for (int i = 0; i < pins.size(); i++) {
             Design pin = DesignFiles.read(CommonOptions.path("--pin", pins.get(i)));
-            pinned.add(entry("pin " + (i + 1) + ": " + label(pin), pin));
+            pinned.add(ReviewPack.Entry.compute("pin " + (i + 1) + ": " + label(pin), pin));
         }
         Path html = CommonOptions.path("--out", out);
         try {
-            List<Path> files = ReviewPack.write(html, entry(label(live), live), pinned, null, null, reference);
+            List<Path> files = ReviewPack.write(html, ReviewPack.Entry.compute(label(live), live), pinned, null, null, reference);
             for (Path file : files) {
                 spec.commandLine().getOut().println(file);
             }
@@ -79,12 +76,5 @@ final class ReviewCommand implements Callable<Integer> {
 
     private static String label(Design design) {
         return design.name().isEmpty() ? "design" : design.name();
-    }
-
-    static ReviewPack.Entry entry(String label, Design design) {
-        LineModel model = design.toModel();
-        return new ReviewPack.Entry(label, design, new SweepEngine().run(model, design.toPair(),
-                design.sweep().grid().frequencies(), design.lengthMetres()),
-                LimitFinder.find(model, design.lengthMetres(), design.threshold(), design.lossBudgetDb()));
     }
 }

@@ -79,7 +79,7 @@ final class WaveformCommand implements Callable<Integer> {
                 period == null ? Double.NaN : Rule.TIME_SPAN.parse("--period", period),
                 Rule.SOURCE_RESISTANCE.parse("--source-ohm", sourceOhm),
                 WaveformSettings.parseLoad("--load-ohm", loadOhm),
-                loadPicofarad == null ? 0.0 : picofarad(loadPicofarad),
+                loadPicofarad == null ? 0.0 : WaveformSettings.parseLoadPicofarads("--load-pf", loadPicofarad),
                 duration == null ? Double.NaN : Rule.TIME_SPAN.parse("--duration", duration));
         Design design = common.loadDesign();
         CommonOptions.printWarnings(design, err);
@@ -95,14 +95,5 @@ final class WaveformCommand implements Callable<Integer> {
         Output.deliver(CommonOptions.path("--out", out), spec.commandLine().getOut(),
                 stream -> WaveformTable.writeCsv(waveform, stream));
         return ExitStatus.OK;
-    }
-
-    /** A capacitance: a bare number is picofarads (the option's unit), or any capacitance with its unit. */
-    private static double picofarad(String text) {
-        String trimmed = text.strip();
-        boolean bare = trimmed.matches("[+-]?(\\d+\\.?\\d*|\\.\\d+)([eE][+-]?\\d+)?");
-        double farad = bare ? Units.parse("--load-pf", trimmed, org.linesweep.design.UnitKind.NUMBER) * 1e-12
-                : Units.parse("--load-pf", trimmed, org.linesweep.design.UnitKind.CAPACITANCE);
-        return Rule.LOAD_CAPACITANCE.check("--load-pf", farad);
     }
 }

@@ -37,6 +37,15 @@ public final class ReviewPack {
 
     /** One design in the pack: the live one or a pin. */
     public record Entry(String label, Design design, SweepResult sweep, FrequencyLimits limits) {
+
+        /** An entry computed from the design: its sweep (with a pair's columns) and its limits. */
+        public static Entry compute(String label, Design design) {
+            LineModel model = design.toModel();
+            return new Entry(label, design, new org.linesweep.sweep.SweepEngine().run(model, design.toPair(),
+                    design.sweep().grid().frequencies(), design.lengthMetres()),
+                    org.linesweep.physics.LimitFinder.find(model, design.lengthMetres(), design.threshold(),
+                            design.lossBudgetDb()));
+        }
     }
 
     /** The optional time-domain part: what was asked and what came out. */

@@ -66,6 +66,21 @@ public record WaveformSettings(WaveShape shape, double riseSeconds, double width
         return Rule.LOAD_RESISTANCE.parse(field, text);
     }
 
+    /**
+     * Parses a load capacitance: a bare number is picofarads (what the "pF" fields and option ask for), any
+     * other text a capacitance with its unit ("2 pF", "1.5e-12 F").
+     */
+    public static double parseLoadPicofarads(String field, String text) {
+        String trimmed = text == null ? "" : text.strip();
+        if (trimmed.isEmpty()) {
+            return 0.0;
+        }
+        boolean bare = trimmed.matches("[+-]?(\\d+\\.?\\d*|\\.\\d+)([eE][+-]?\\d+)?");
+        double farad = bare ? org.linesweep.design.Units.parse(field, trimmed, org.linesweep.design.UnitKind.NUMBER) * 1e-12
+                : org.linesweep.design.Units.parse(field, trimmed, org.linesweep.design.UnitKind.CAPACITANCE);
+        return Rule.LOAD_CAPACITANCE.check(field, farad);
+    }
+
     /** The stimulus. */
     public Stimulus stimulus() {
         return new Stimulus(shape, riseSeconds, widthSeconds, periodSeconds);

@@ -6,22 +6,10 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 import java.io.IOException;
 import java.nio.file.Files;
 import java.nio.file.Path;
-import java.util.List;
-import java.util.Optional;
-import java.util.concurrent.CopyOnWriteArrayList;
-import java.util.concurrent.ExecutorService;
-import java.util.concurrent.Executors;
-import java.util.concurrent.TimeUnit;
 import java.util.concurrent.TimeoutException;
-import java.util.prefs.Preferences;
-import javafx.application.Platform;
-import javafx.scene.Scene;
 import javafx.scene.control.Slider;
 import javafx.stage.Stage;
-import org.junit.jupiter.api.AfterEach;
 import org.junit.jupiter.api.Test;
-import org.junit.jupiter.api.extension.ExtendWith;
-import org.junit.jupiter.api.io.TempDir;
 import org.linesweep.app.model.ExplorerModel;
 import org.linesweep.app.model.SweepSnapshot;
 import org.linesweep.app.view.FrequencyPlot;
@@ -33,64 +21,25 @@ import org.linesweep.io.Presets;
 import org.linesweep.physics.LineType;
 import org.linesweep.sweep.GridScale;
 import org.testfx.api.FxRobot;
-import org.testfx.framework.junit5.ApplicationExtension;
 import org.testfx.framework.junit5.Start;
-import org.testfx.util.WaitForAsyncUtils;
 
 /**
  * The explorer under abuse: sliders dragged end to end, the line type switched mid-drag, pins toggled
  * rapidly, a file opened while a sweep is running. Nothing may throw on any thread, and once things settle
  * the curves on screen must belong to the newest design (no stale result drawn over a newer one).
  */
-@ExtendWith(ApplicationExtension.class)
-class ExplorerStressTest {
-
-    @TempDir
-    Path folder;
-
-    private final List<Throwable> uncaught = new CopyOnWriteArrayList<>();
-    private ExecutorService worker;
-    private ExplorerModel model;
-    private ExplorerWindow window;
-    private Path next;
+class ExplorerStressTest extends WindowTestBase {
 
     @Start
     void start(Stage stage) {
-        Thread.setDefaultUncaughtExceptionHandler((t, e) -> uncaught.add(e));
-        Thread.currentThread().setUncaughtExceptionHandler((t, e) -> uncaught.add(e));
-        worker = Executors.newSingleThreadExecutor();
+        open(stage);
+    }
+
+    /** The bench patch lead at 20,000 points: the heaviest sweep the explorer is asked for here. */
+    @Override
+    Design initialDesign() {
         Design heavy = Presets.load("bench-patch-lead");
-        heavy = heavy.withSweep(new SweepSettings(heavy.sweep().fromHz(), heavy.sweep().toHz(), 20_000, GridScale.LOG));
-        model = new ExplorerModel(heavy, worker, Platform::runLater);
-        window = new ExplorerWindow(model, new FileDialogs() {
-            @Override
-            public Optional<Path> open(String title, String extension) {
-                return Optional.ofNullable(next);
-            }
-
-            @Override
-            public Optional<Path> save(String title, String extension, String suggestedName) {
-                return Optional.ofNullable(next);
-            }
-        }, Preferences.userRoot().node("org/linesweep/stress-" + System.nanoTime()));
-        stage.setScene(new Scene(window.root(), 1400, 900));
-        stage.show();
-    }
-
-    @AfterEach
-    void stop() {
-        worker.shutdownNow();
-        if (!uncaught.isEmpty()) {
-            throw new AssertionError("uncaught: " + uncaught.get(0), uncaught.get(0));
-        }
-    }
-
-    private void settle() throws TimeoutException {
-        WaitForAsyncUtils.waitFor(30, TimeUnit.SECONDS, () -> {
-            SweepSnapshot s = model.snapshotProperty().get();
-            return s != null && s.design().equals(model.getDesign());
-        });
-        WaitForAsyncUtils.waitForFxEvents();
+        return heavy.withSweep(new SweepSettings(heavy.sweep().fromHz(), heavy.sweep().toHz(), 20_000, GridScale.LOG));
     }
 
     /** The impedance plot shows the newest snapshot's |Z0|, point for point. */
@@ -166,7 +115,7 @@ class ExplorerStressTest {
     void openingAFileWhileASweepRuns(FxRobot robot) throws IOException, TimeoutException {
         Path file = folder.resolve("trace.json");
         Files.writeString(file, DesignFiles.toJson(Presets.load("board-trace-50-ohm")));
-        next = file;
+        dialogs.next = file;
         Slider slider = window.designPanel().geometryControl("outerDiameter").slider();
         robot.interact(() -> slider.setValueChanging(true));
         robot.interact(() -> slider.setValue(900));

@@ -9,33 +9,20 @@ import java.io.IOException;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.List;
-import java.util.Optional;
-import java.util.concurrent.ExecutorService;
-import java.util.concurrent.Executors;
 import java.util.concurrent.TimeUnit;
 import java.util.concurrent.TimeoutException;
-import java.util.prefs.Preferences;
-import javafx.application.Platform;
-import javafx.scene.Scene;
 import javafx.scene.control.Slider;
 import javafx.scene.input.KeyCode;
 import javafx.stage.Stage;
 import javax.imageio.ImageIO;
-import org.junit.jupiter.api.AfterEach;
 import org.junit.jupiter.api.Test;
-import org.junit.jupiter.api.extension.ExtendWith;
-import org.junit.jupiter.api.io.TempDir;
-import org.linesweep.app.model.ExplorerModel;
-import org.linesweep.app.model.SweepSnapshot;
 import org.linesweep.app.view.FrequencyPlot;
 import org.linesweep.app.view.PlotMarker;
 import org.linesweep.design.Design;
-import org.linesweep.io.Presets;
 import org.linesweep.io.SweepTable;
 import org.linesweep.physics.FrequencyLimits;
 import org.linesweep.physics.LimitFinder;
 import org.testfx.api.FxRobot;
-import org.testfx.framework.junit5.ApplicationExtension;
 import org.testfx.framework.junit5.Start;
 import org.testfx.util.WaitForAsyncUtils;
 
@@ -43,65 +30,11 @@ import org.testfx.util.WaitForAsyncUtils;
  * One walk through the real window, headless: open a preset, drag a geometry slider, toggle marker mode,
  * pin and compare, type an invalid value, export CSV and PNG and read them back.
  */
-@ExtendWith(ApplicationExtension.class)
-class ExplorerWindowTest {
-
-    @TempDir
-    Path folder;
-
-    private ExecutorService worker;
-    private ExplorerModel model;
-    private ExplorerWindow window;
-    private final StubDialogs dialogs = new StubDialogs();
-    /** Exceptions nobody caught, on any thread; a test fails if one occurred. */
-    private final List<Throwable> uncaught = new java.util.concurrent.CopyOnWriteArrayList<>();
-
-    /** File dialogs that answer with a path chosen by the test. */
-    static final class StubDialogs implements FileDialogs {
-        Path next;
-
-        @Override
-        public Optional<Path> open(String title, String extension) {
-            return Optional.ofNullable(next);
-        }
-
-        @Override
-        public Optional<Path> save(String title, String extension, String suggestedName) {
-            return Optional.ofNullable(next);
-        }
-    }
+class ExplorerWindowTest extends WindowTestBase {
 
     @Start
-    void start(Stage stage) throws Exception {
-        Thread.setDefaultUncaughtExceptionHandler((t, e) -> uncaught.add(e));
-        Thread.currentThread().setUncaughtExceptionHandler((t, e) -> uncaught.add(e));
-        worker = Executors.newSingleThreadExecutor();
-        model = new ExplorerModel(Presets.load("bench-patch-lead"), worker, Platform::runLater);
-        Preferences preferences = Preferences.userRoot().node("org/linesweep/test-" + System.nanoTime());
-        window = new ExplorerWindow(model, dialogs, preferences);
-        stage.setScene(new Scene(window.root(), 1400, 900));
-        window.attach(stage);
-        stage.show();
-    }
-
-    @AfterEach
-    void stop() {
-        worker.shutdownNow();
-        if (!uncaught.isEmpty()) {
-            AssertionError failure = new AssertionError("uncaught exception on the FX thread: " + uncaught.get(0),
-                    uncaught.get(0));
-            uncaught.clear();
-            throw failure;
-        }
-    }
-
-    /** Waits until the computation has caught up with the design. */
-    private void settle() throws TimeoutException {
-        WaitForAsyncUtils.waitFor(10, TimeUnit.SECONDS, () -> {
-            SweepSnapshot s = model.snapshotProperty().get();
-            return s != null && s.design().equals(model.getDesign());
-        });
-        WaitForAsyncUtils.waitForFxEvents();
+    void start(Stage stage) {
+        open(stage);
     }
 
     private double readoutZ0() {

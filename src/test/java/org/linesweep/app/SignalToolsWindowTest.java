@@ -10,23 +10,13 @@ import java.io.IOException;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.List;
-import java.util.concurrent.ExecutorService;
-import java.util.concurrent.Executors;
 import java.util.concurrent.TimeUnit;
 import java.util.concurrent.TimeoutException;
-import java.util.prefs.Preferences;
-import javafx.application.Platform;
-import javafx.scene.Scene;
 import javafx.scene.control.CheckBox;
 import javafx.scene.control.TextField;
 import javafx.stage.Stage;
 import javax.imageio.ImageIO;
-import org.junit.jupiter.api.AfterEach;
 import org.junit.jupiter.api.Test;
-import org.junit.jupiter.api.extension.ExtendWith;
-import org.junit.jupiter.api.io.TempDir;
-import org.linesweep.app.model.ExplorerModel;
-import org.linesweep.app.model.SweepSnapshot;
 import org.linesweep.app.view.PlotSeries;
 import org.linesweep.design.Design;
 import org.linesweep.design.Synthesis;
@@ -35,7 +25,6 @@ import org.linesweep.io.Touchstone;
 import org.linesweep.physics.PhysicalConstants;
 import org.linesweep.signal.Waveform;
 import org.testfx.api.FxRobot;
-import org.testfx.framework.junit5.ApplicationExtension;
 import org.testfx.framework.junit5.Start;
 import org.testfx.util.WaitForAsyncUtils;
 
@@ -44,46 +33,11 @@ import org.testfx.util.WaitForAsyncUtils;
  * its read-out and curves, solving a pair's gap for a differential target, the Touchstone export and the
  * review pack.
  */
-@ExtendWith(ApplicationExtension.class)
-class SignalToolsWindowTest {
-
-    @TempDir
-    Path folder;
-
-    private ExecutorService worker;
-    private ExplorerModel model;
-    private ExplorerWindow window;
-    private final ExplorerWindowTest.StubDialogs dialogs = new ExplorerWindowTest.StubDialogs();
-    private final List<Throwable> uncaught = new java.util.concurrent.CopyOnWriteArrayList<>();
+class SignalToolsWindowTest extends WindowTestBase {
 
     @Start
     void start(Stage stage) {
-        Thread.setDefaultUncaughtExceptionHandler((t, e) -> uncaught.add(e));
-        Thread.currentThread().setUncaughtExceptionHandler((t, e) -> uncaught.add(e));
-        worker = Executors.newSingleThreadExecutor();
-        model = new ExplorerModel(Presets.load("bench-patch-lead"), worker, Platform::runLater);
-        window = new ExplorerWindow(model, dialogs, Preferences.userRoot().node("org/linesweep/test-" + System.nanoTime()));
-        stage.setScene(new Scene(window.root(), 1400, 900));
-        window.attach(stage);
-        stage.show();
-    }
-
-    @AfterEach
-    void stop() {
-        worker.shutdownNow();
-        if (!uncaught.isEmpty()) {
-            AssertionError failure = new AssertionError("uncaught exception: " + uncaught.get(0), uncaught.get(0));
-            uncaught.clear();
-            throw failure;
-        }
-    }
-
-    private void settle() throws TimeoutException {
-        WaitForAsyncUtils.waitFor(10, TimeUnit.SECONDS, () -> {
-            SweepSnapshot s = model.snapshotProperty().get();
-            return s != null && s.design().equals(model.getDesign());
-        });
-        WaitForAsyncUtils.waitForFxEvents();
+        open(stage);
     }
 
     private Waveform awaitWaveformOtherThan(Waveform previous) throws TimeoutException {

@@ -11,19 +11,13 @@ import java.util.List;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 import org.linesweep.design.Design;
-import org.linesweep.physics.LimitFinder;
-import org.linesweep.physics.LineModel;
 import org.linesweep.signal.WaveformSettings;
-import org.linesweep.sweep.SweepEngine;
 
 /** The review pack written without a window: every part present, consistent with the core, and safe HTML. */
 class ReviewPackTest {
 
     private static ReviewPack.Entry entry(String label, Design design) {
-        LineModel model = design.toModel();
-        return new ReviewPack.Entry(label, design, new SweepEngine().run(model, design.toPair(),
-                design.sweep().grid().frequencies(), design.lengthMetres()),
-                LimitFinder.find(model, design.lengthMetres(), design.threshold(), design.lossBudgetDb()));
+        return ReviewPack.Entry.compute(label, design);
     }
 
     @Test

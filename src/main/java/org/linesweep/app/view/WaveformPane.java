@@ -25,7 +25,6 @@ import org.linesweep.app.model.ExplorerModel;
 import org.linesweep.design.Design;
 import org.linesweep.design.InvalidInputException;
 import org.linesweep.design.Rule;
-import org.linesweep.design.UnitKind;
 import org.linesweep.design.Units;
 import org.linesweep.signal.WaveShape;
 import org.linesweep.signal.Waveform;
@@ -220,7 +219,7 @@ public final class WaveformPane extends HBox {
                     chosen == WaveShape.SQUARE ? Rule.TIME_SPAN.parse("period", period.getText()) : Double.NaN,
                     Rule.SOURCE_RESISTANCE.parse("source Ω", source.getText()),
                     WaveformSettings.parseLoad("load Ω", load.getText()),
-                    picofarads(capacitance.getText()),
+                    WaveformSettings.parseLoadPicofarads("load pF", capacitance.getText()),
                     duration.getText().isBlank() ? Double.NaN : Rule.TIME_SPAN.parse("duration", duration.getText()));
             message.setText("");
             if (!next.equals(settings)) {
@@ -232,17 +231,6 @@ public final class WaveformPane extends HBox {
             message.setText(e.getMessage() + " (the waveform keeps the last valid settings)");
             return false;
         }
-    }
-
-    private static double picofarads(String text) {
-        String trimmed = text.strip();
-        if (trimmed.isEmpty()) {
-            return 0.0;
-        }
-        boolean bare = trimmed.matches("[+-]?(\\d+\\.?\\d*|\\.\\d+)([eE][+-]?\\d+)?");
-        double farad = bare ? Units.parse("load pF", trimmed, UnitKind.NUMBER) * 1e-12
-                : Units.parse("load pF", trimmed, UnitKind.CAPACITANCE);
-        return Rule.LOAD_CAPACITANCE.check("load pF", farad);
     }
 
     private void recompute() {
