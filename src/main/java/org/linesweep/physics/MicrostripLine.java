@@ -33,6 +33,11 @@ public final class MicrostripLine extends LineModel {
     private final double stripDerivativeOhmPerMetre;
     private final double groundDerivativeOhmPerMetre;
     private final double[] constantStatic;
+    /**
+     * The Hammerstad-Jensen static values (Z0 as the real part, ε_eff(0) as the imaginary part) against ε′,
+     * tabulated over a sweep's range of ε′(f) when the dielectric is dispersive; null otherwise.
+     */
+    private volatile HermiteTable staticTable;
 
     public MicrostripLine(double widthMetres, double heightMetres, double thicknessMetres, Conductor conductor,
             Dielectric dielectric) {
@@ -69,7 +74,58 @@ public final class MicrostripLine extends LineModel {
 
     /** Quasi-static Z0 and ε_eff(0) at the dielectric's ε′(f). */
     public double[] staticImpedanceAndPermittivity(double frequencyHz) {
-        return constantStatic != null ? constantStatic : staticAt(permittivity.real(frequencyHz));
+        if (constantStatic != null) {
+            return constantStatic;
+        }
+        double relativePermittivity = permittivity.real(frequencyHz);
+        HermiteTable table = staticTable;
+        if (table != null && table.covers(relativePermittivity)) {
+            double[] out = new double[4];
+            table.evaluate(relativePermittivity, out);
+            return new double[] {out[0], out[1]};
+        }
+        return staticAt(relativePermittivity);
+    }
+
+    /** Relative step of the central difference in ε′ at the static table's nodes. */
+    static final double STATIC_TABLE_STEP = 1e-5;
+    /** Nodes per unit of ln ε′ in the static table (a sweep spans a few hundredths of a unit). */
+    static final int STATIC_TABLE_NODES_PER_UNIT_LOG = 512;
+
+    /**
+     * With a wideband dielectric the Hammerstad-Jensen static values change with f only through ε′(f), which a
+     * sweep moves over a narrow range (a few per cent): tabulate them over that range, padded so the
+     * slopes' neighbouring evaluations stay inside, from a handful of exact evaluations (slopes in ε′ by
+     * central difference at the nodes). Each point then reads the table instead of three exact evaluations.
+     */
+    @Override
+    public void prepareForSweep(double[] frequenciesHz, int count) {
+        if (constantStatic != null || count < 16) {
+            return;
+        }
+        double low = Double.POSITIVE_INFINITY;
+        double high = 0.0;
+        for (int i = 0; i < count; i++) {
+            double value = permittivity.real(frequenciesHz[i]);
+            low = Math.min(low, value);
+            high = Math.max(high, value);
+        }
+        low *= 1 - 1e-3;
+        high *= 1 + 1e-3;
+        HermiteTable existing = staticTable;
+        if (!(low > 1.0) || (existing != null && existing.covers(low) && existing.covers(high))) {
+            return;
+        }
+        staticTable = new HermiteTable((relativePermittivity, out) -> {
+            double[] here = staticAt(relativePermittivity);
+            double[] above = staticAt(relativePermittivity * (1 + STATIC_TABLE_STEP));
+            double[] below = staticAt(relativePermittivity * (1 - STATIC_TABLE_STEP));
+            double span = 2 * STATIC_TABLE_STEP * relativePermittivity;
+            out[0] = here[0];
+            out[1] = here[1];
+            out[2] = (above[0] - below[0]) / span;
+            out[3] = (above[1] - below[1]) / span;
+        }, low, high, STATIC_TABLE_NODES_PER_UNIT_LOG);
     }
 
     /** Kirschning-Jansen ε_eff(f). */
