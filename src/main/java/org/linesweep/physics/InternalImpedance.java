@@ -326,9 +326,8 @@ public final class InternalImpedance {
         if (Double.isInfinite(thicknessMetres)) {
             return ONE_PLUS_J.multiply(roughness / (sigma * delta));
         }
-        Complex x = ONE_PLUS_J.multiply(thicknessMetres / delta);
-        // Z_s·σt = (k t)·coth(k t) = x·coth(x)
-        return xCothX(x).multiply(roughness / (sigma * thicknessMetres));
+        // Z_s·σt = (k t)·coth(k t) = u·coth(u)
+        return flatRatioWithSlope(thicknessMetres / delta)[0].multiply(roughness / (sigma * thicknessMetres));
     }
 
     /**
@@ -348,11 +347,41 @@ public final class InternalImpedance {
                     frequencyHz);
         }
         double x = thicknessMetres / delta;
-        Complex argument = ONE_PLUS_J.multiply(x);
-        Complex value = xCothX(argument);
-        Complex slope = xCothXSlope(argument).multiply(ONE_PLUS_J);
-        return scaleWithSlope(conductor, 1.0 / (sigma * thicknessMetres), new Complex[] {value, slope}, x,
-                frequencyHz);
+        return scaleWithSlope(conductor, 1.0 / (sigma * thicknessMetres), flatRatioWithSlope(x), x, frequencyHz);
+    }
+
+    /**
+     * A flat conductor's Z_s/R_dc = u·coth u with u = (1 + j)·t/δ, and its derivative in t/δ: a function of t/δ
+     * alone, so read from one shared table (like the round wire's) between t/δ = 0.01 and 1000 and computed
+     * exactly outside it.
+     */
+    static Complex[] flatRatioWithSlope(double thicknessOverSkinDepth) {
+        if (FlatTable.TABLE.covers(thicknessOverSkinDepth)) {
+            double[] out = new double[4];
+            FlatTable.TABLE.evaluate(thicknessOverSkinDepth, out);
+            return new Complex[] {new Complex(out[0], out[1]), new Complex(out[2], out[3])};
+        }
+        return exactFlatRatioWithSlope(thicknessOverSkinDepth);
+    }
+
+    /** The exact u·coth u and its slope (what the table is built from). */
+    static Complex[] exactFlatRatioWithSlope(double thicknessOverSkinDepth) {
+        Complex argument = ONE_PLUS_J.multiply(thicknessOverSkinDepth);
+        return new Complex[] {xCothX(argument), xCothXSlope(argument).multiply(ONE_PLUS_J)};
+    }
+
+    /** Holder of the flat conductor's table: built on first use. */
+    static final class FlatTable {
+        static final HermiteTable TABLE = new HermiteTable((x, out) -> {
+            Complex[] exact = exactFlatRatioWithSlope(x);
+            out[0] = exact[0].getReal();
+            out[1] = exact[0].getImaginary();
+            out[2] = exact[1].getReal();
+            out[3] = exact[1].getImaginary();
+        }, 0.01, 1000.0, ROUND_WIRE_TABLE_NODES_PER_UNIT_LOG);
+
+        private FlatTable() {
+        }
     }
 
     /** d(x·coth x)/dx = coth x − x·(coth² x − 1), with its series for small |x|. */

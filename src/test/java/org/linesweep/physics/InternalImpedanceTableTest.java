@@ -60,4 +60,21 @@ class InternalImpedanceTableTest {
             assertTrue(worstSlope < TUBE_SLOPE_TOLERANCE, "c/b " + kappa + " slope " + worstSlope);
         }
     }
+
+    /** The flat conductor's u·coth u, u = (1 + j)t/δ, against its exact form. */
+    @Test
+    void flatTableMatchesTheExactForm() {
+        SplittableRandom random = new SplittableRandom(13);
+        double worstValue = 0;
+        double worstSlope = 0;
+        for (int i = 0; i < 20_000; i++) {
+            double x = Math.exp(Math.log(0.01) + random.nextDouble() * Math.log(1e5));
+            Complex[] table = InternalImpedance.flatRatioWithSlope(x);
+            Complex[] exact = InternalImpedance.exactFlatRatioWithSlope(x);
+            worstValue = Math.max(worstValue, table[0].subtract(exact[0]).abs() / exact[0].abs());
+            worstSlope = Math.max(worstSlope, table[1].subtract(exact[1]).abs() / (exact[0].abs() / x));
+        }
+        assertTrue(worstValue < VALUE_TOLERANCE, "value " + worstValue);
+        assertTrue(worstSlope < SLOPE_TOLERANCE, "slope " + worstSlope);
+    }
 }
