@@ -111,6 +111,19 @@ class SignalToolsWindowTest extends WindowTestBase {
         settle();
         Design solved = model.getDesign();
         assertEquals(90, solved.toPair().modes(1e9).differentialImpedanceOhm(), 1e-6);
+        // a pinned pair shows its Zdiff in the comparison table
+        robot.interact(() -> {
+            model.pinCurrent();
+        });
+        javafx.scene.control.TableColumn<?, ?> zdiffColumn = window.compare().table().getColumns().stream()
+                .filter(c -> "pins-zdiff".equals(c.getId())).findFirst().orElseThrow();
+        assertTrue(zdiffColumn.isVisible());
+        String cell = String.valueOf(zdiffColumn.getCellData(0));
+        double frequency = Math.sqrt(solved.sweep().fromHz() * solved.sweep().toHz());
+        assertEquals(solved.toPair().modes(frequency).differentialImpedanceOhm(), Double.parseDouble(cell), 0.01);
+        robot.interact(() -> {
+            model.unpinAll();
+        });
         robot.interact(model::undo);
         robot.interact(model::undo);
         settle();

@@ -14,6 +14,7 @@ import javafx.scene.shape.Line;
 import org.linesweep.app.model.ExplorerModel;
 import org.linesweep.app.model.Pin;
 import org.linesweep.app.model.SweepSnapshot;
+import org.linesweep.design.Design;
 import org.linesweep.physics.LinePoint;
 
 /**
@@ -28,6 +29,7 @@ public final class ComparePane extends VBox {
     private final Button unpin = new Button("Unpin");
     private final Button clear = new Button("Clear pins");
     private Palette palette = Palette.STANDARD;
+    private final TableColumn<Pin, String> differential = new TableColumn<>("Zdiff Ω");
 
     public ComparePane(ExplorerModel model) {
         this.model = model;
@@ -94,6 +96,18 @@ public final class ComparePane extends VBox {
         });
         table.getColumns().add(ceiling);
         table.getColumns().add(ceilingChange);
+        differential.setId("pins-zdiff");
+        differential.setCellValueFactory(c -> {
+            SweepSnapshot live = model.snapshotProperty().get();
+            Design pinned = c.getValue().snapshot().design();
+            if (live == null || !pinned.geometry().isPair()) {
+                return new ReadOnlyStringWrapper("—");
+            }
+            return new ReadOnlyStringWrapper(Display.number(pinned.toPair().modes(readoutFrequency(live))
+                    .differentialImpedanceOhm()));
+        });
+        differential.setVisible(false);
+        table.getColumns().add(differential);
         pin.setTooltip(new javafx.scene.control.Tooltip("Pin the current design for comparison (Ctrl+P)"));
         table.setTooltip(new javafx.scene.control.Tooltip("Values at the read-out frequency; differences are pin − live"));
         Label note = new Label("Δ = pin − live, at the read-out frequency");
@@ -102,7 +116,11 @@ public final class ComparePane extends VBox {
         getChildren().addAll(buttons, table);
         model.snapshotProperty().addListener((o, old, now) -> table.refresh());
         model.crosshairHzProperty().addListener((o, old, now) -> table.refresh());
-        model.pins().addListener((ListChangeListener<Pin>) c -> table.refresh());
+        model.pins().addListener((ListChangeListener<Pin>) c -> {
+            // a pair's differential impedance is the number its variants are compared by
+            differential.setVisible(model.pins().stream().anyMatch(pin -> pin.snapshot().design().geometry().isPair()));
+            table.refresh();
+        });
         model.meetingModeProperty().addListener((o, old, now) -> {
             palette = now ? Palette.MEETING : Palette.STANDARD;
             table.refresh();
