@@ -396,23 +396,40 @@ public final class ExplorerWindow {
         return waveform;
     }
 
-    /** Reference impedance of exported two-ports. */
-    static final double TOUCHSTONE_REFERENCE_OHM = 50.0;
+    /** Reference impedance of exported two-ports: 50 Ω until the user chooses another. */
+    private double touchstoneReferenceOhm = 50.0;
 
-    /** Exports the live line as a Touchstone two-port on its sweep grid. */
+    /** Asks for the reference impedance (50 Ω offered), then where to write the two-port. */
     public void exportTouchstone() {
-        dialogs.save("Export Touchstone two-port", "s2p", "linesweep-line.s2p").ifPresent(this::exportTouchstone);
+        javafx.scene.control.TextInputDialog ask = new javafx.scene.control.TextInputDialog(
+                org.linesweep.app.view.Display.number(touchstoneReferenceOhm));
+        ask.setTitle("Export Touchstone two-port");
+        ask.setHeaderText("Port reference impedance for the S-parameters");
+        ask.setContentText("Reference (Ω):");
+        ask.showAndWait().ifPresent(text -> {
+            double reference;
+            try {
+                reference = org.linesweep.design.Rule.REFERENCE_IMPEDANCE.parse("reference impedance", text);
+            } catch (InvalidInputException e) {
+                model.report(e.getMessage());
+                return;
+            }
+            dialogs.save("Export Touchstone two-port", "s2p", "linesweep-line.s2p")
+                    .ifPresent(target -> exportTouchstone(target, reference));
+        });
     }
 
-    public void exportTouchstone(Path target) {
+    /** Writes the live line as a Touchstone two-port on its sweep grid, against the given reference. */
+    public void exportTouchstone(Path target, double referenceOhm) {
         Design design = model.getDesign();
         try {
             org.linesweep.signal.ScatteringSweep sweep = org.linesweep.signal.ScatteringSweep.of(design.toModel(),
-                    design.lengthMetres(), design.sweep().grid().frequencies(), TOUCHSTONE_REFERENCE_OHM);
+                    design.lengthMetres(), design.sweep().grid().frequencies(), referenceOhm);
             AtomicFiles.write(target, out -> org.linesweep.io.Touchstone.write(sweep,
-                    org.linesweep.io.Touchstone.header(design, TOUCHSTONE_REFERENCE_OHM), out));
-            model.report("Exported " + target.getFileName() + " (reference 50 Ω, " + design.sweep().points()
-                    + " frequencies)");
+                    org.linesweep.io.Touchstone.header(design, referenceOhm), out));
+            touchstoneReferenceOhm = referenceOhm;
+            model.report("Exported " + target.getFileName() + " (reference " + org.linesweep.app.view.Display.number(referenceOhm) + " Ω, "
+                    + design.sweep().points() + " frequencies)");
         } catch (IOException | RuntimeException e) {
             model.report("Could not export " + target.getFileName() + ": " + e.getMessage());
         }
@@ -457,7 +474,7 @@ public final class ExplorerWindow {
             java.util.List<Path> files = org.linesweep.io.ReviewPack.write(target,
                     new org.linesweep.io.ReviewPack.Entry(design.name().isEmpty() ? "live design" : design.name(),
                             design, snapshot.sweep(), snapshot.limits()),
-                    pins, png.toByteArray(), timeDomain, TOUCHSTONE_REFERENCE_OHM);
+                    pins, png.toByteArray(), timeDomain, touchstoneReferenceOhm);
             model.report("Exported the review pack: " + files.size() + " files beside " + target.getFileName());
         } catch (IOException | RuntimeException e) {
             model.report("Could not export the review pack " + target.getFileName() + ": " + e.getMessage());

@@ -12,6 +12,7 @@ import java.nio.file.Path;
 import java.util.List;
 import java.util.concurrent.TimeUnit;
 import java.util.concurrent.TimeoutException;
+import javafx.application.Platform;
 import javafx.scene.control.CheckBox;
 import javafx.scene.control.TextField;
 import javafx.stage.Stage;
@@ -137,10 +138,17 @@ class SignalToolsWindowTest extends WindowTestBase {
         settle();
         Path s2p = folder.resolve("lead.s2p");
         dialogs.next = s2p;
-        robot.interact(() -> { window.exportTouchstone(); });
+        // the menu action asks for the reference impedance first: answer 75 Ω in its dialog
+        Platform.runLater(window::exportTouchstone);
+        WaitForAsyncUtils.waitForFxEvents();
+        javafx.scene.control.DialogPane pane = robot.lookup(".dialog-pane").queryAs(javafx.scene.control.DialogPane.class);
+        javafx.scene.control.TextField reference = robot.from(pane).lookup(".text-field").queryAs(TextField.class);
+        robot.interact(() -> reference.setText("75"));
+        robot.interact(() -> ((javafx.scene.control.Button) pane.lookupButton(javafx.scene.control.ButtonType.OK)).fire());
+        WaitForAsyncUtils.waitForFxEvents();
         Touchstone.TwoPortData data = Touchstone.read(s2p);
         assertEquals(model.getDesign().sweep().points(), data.size());
-        assertEquals(50.0, data.referenceOhm());
+        assertEquals(75.0, data.referenceOhm());
 
         robot.interact(() -> { model.pinCurrent(); });
         robot.interact(() -> model.apply(d -> d.withLength(3.0)));
@@ -162,5 +170,7 @@ class SignalToolsWindowTest extends WindowTestBase {
         List<String> limits = Files.readAllLines(folder.resolve("lead-review-limits.csv"));
         assertEquals(3, limits.size(), "header, live, one pin");
         assertEquals("time_s,input_v,output_v", Files.readAllLines(folder.resolve("lead-review-waveform.csv")).get(0));
+        // the pack's two-ports use the reference chosen for the last export
+        assertEquals(75.0, Touchstone.read(folder.resolve("lead-review.s2p")).referenceOhm());
     }
 }
