@@ -114,8 +114,9 @@ public final class ComparePane extends VBox {
         note.getStyleClass().add("compare-note");
         HBox buttons = new HBox(6, pin, unpin, clear, note);
         getChildren().addAll(buttons, table);
-        model.snapshotProperty().addListener((o, old, now) -> table.refresh());
-        model.crosshairHzProperty().addListener((o, old, now) -> table.refresh());
+        // refreshing rebuilds the table's cells and lays the window out again: only when there is a row to show
+        model.snapshotProperty().addListener((o, old, now) -> refreshRows());
+        model.crosshairHzProperty().addListener((o, old, now) -> refreshRows());
         model.pins().addListener((ListChangeListener<Pin>) c -> {
             // a pair's differential impedance is the number its variants are compared by
             differential.setVisible(model.pins().stream().anyMatch(pin -> pin.snapshot().design().geometry().isPair()));
@@ -125,6 +126,12 @@ public final class ComparePane extends VBox {
             palette = now ? Palette.MEETING : Palette.STANDARD;
             table.refresh();
         });
+    }
+
+    private void refreshRows() {
+        if (!model.pins().isEmpty()) {
+            table.refresh();
+        }
     }
 
     public TableView<Pin> table() {
