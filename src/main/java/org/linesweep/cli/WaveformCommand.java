@@ -1,12 +1,10 @@
 package org.linesweep.cli;
 
 import java.io.PrintWriter;
-import java.util.Locale;
 import java.util.concurrent.Callable;
 import org.linesweep.design.Design;
 import org.linesweep.design.InvalidInputException;
 import org.linesweep.design.Rule;
-import org.linesweep.design.Units;
 import org.linesweep.io.WaveformTable;
 import org.linesweep.physics.LineModel;
 import org.linesweep.signal.WaveShape;
@@ -88,9 +86,7 @@ final class WaveformCommand implements Callable<Integer> {
         for (String warning : waveform.warnings()) {
             err.println("warning: " + warning);
         }
-        err.println(String.format(Locale.ROOT, "delay %s, output rise (10-90 %%) %s, overshoot %.2f %%, settles to %.6g V",
-                Units.engineering(waveform.delaySeconds(), "s", 4), Units.engineering(waveform.outputRiseSeconds(), "s", 4),
-                waveform.overshootPercent(), waveform.settledVolts()));
+        err.println("far end: " + waveform.summary());
         err.flush();
         Output.deliver(CommonOptions.path("--out", out), spec.commandLine().getOut(),
                 stream -> WaveformTable.writeCsv(waveform, stream));

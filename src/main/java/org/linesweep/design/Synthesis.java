@@ -3,7 +3,6 @@ package org.linesweep.design;
 import java.util.Locale;
 import java.util.function.DoubleUnaryOperator;
 import org.apache.commons.math3.analysis.solvers.BrentSolver;
-import org.linesweep.physics.LinePoint;
 
 /**
  * Synthesis: the value of one geometry field that makes the line meet a target (|Z0|, attenuation or delay
@@ -52,15 +51,11 @@ public final class Synthesis {
 
         /** The quantity's value for a design at a frequency. */
         public double of(Design design, double frequencyHz) {
-            if (this == DIFFERENTIAL_IMPEDANCE) {
-                return design.toPair().modes(frequencyHz).differentialImpedanceOhm();
-            }
-            LinePoint p = design.toModel().at(frequencyHz);
             return switch (this) {
-                case Z0_MAGNITUDE -> p.z0MagnitudeOhm();
-                case ATTENUATION -> p.alphaDbPerMetre();
-                case DELAY -> p.delaySeconds(1.0);
-                case DIFFERENTIAL_IMPEDANCE -> throw new IllegalStateException();
+                case Z0_MAGNITUDE -> design.toModel().at(frequencyHz).z0MagnitudeOhm();
+                case ATTENUATION -> design.toModel().at(frequencyHz).alphaDbPerMetre();
+                case DELAY -> design.toModel().at(frequencyHz).delaySeconds(1.0);
+                case DIFFERENTIAL_IMPEDANCE -> design.toPair().modes(frequencyHz).differentialImpedanceOhm();
             };
         }
     }

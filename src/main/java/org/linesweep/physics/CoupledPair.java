@@ -163,9 +163,4 @@ public final class CoupledPair {
         }
         return warnings;
     }
-
-    /** The gap, m. */
-    public double gapMetres() {
-        return gapMetres;
-    }
 }

@@ -1,5 +1,7 @@
 package org.linesweep.physics;
 
+import org.apache.commons.math3.complex.Complex;
+
 /**
  * A complex function F(x) of a real x &gt; 0 and its derivative F′(x), tabulated on a uniform grid in u = ln x
  * and read back by cubic Hermite interpolation of G(u) = F(e^u) from its values and slopes dG/du = x·F′(x) at
@@ -56,9 +58,26 @@ final class HermiteTable {
         }
     }
 
-    /** Number of nodes. */
-    int size() {
-        return valueRe.length;
+    /**
+     * A table of a complex function given as {F(x), F′(x)}: the internal impedances' exact forms all have that
+     * shape.
+     */
+    static HermiteTable of(java.util.function.DoubleFunction<Complex[]> exact, double xMin, double xMax,
+            int nodesPerUnitLog) {
+        return new HermiteTable((x, out) -> {
+            Complex[] valueAndSlope = exact.apply(x);
+            out[0] = valueAndSlope[0].getReal();
+            out[1] = valueAndSlope[0].getImaginary();
+            out[2] = valueAndSlope[1].getReal();
+            out[3] = valueAndSlope[1].getImaginary();
+        }, xMin, xMax, nodesPerUnitLog);
+    }
+
+    /** {F(x), F′(x)} at a {@linkplain #covers covered} x, as complex numbers. */
+    Complex[] valueAndSlope(double x) {
+        double[] out = new double[4];
+        evaluate(x, out);
+        return new Complex[] {new Complex(out[0], out[1]), new Complex(out[2], out[3])};
     }
 
     /** True when x lies inside the table. */

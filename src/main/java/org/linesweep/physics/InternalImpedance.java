@@ -45,9 +45,7 @@ public final class InternalImpedance {
             return new Complex[] {Complex.ONE, Complex.ZERO};
         }
         if (RoundWireTable.TABLE.covers(radiusOverSkinDepth)) {
-            double[] out = new double[4];
-            RoundWireTable.TABLE.evaluate(radiusOverSkinDepth, out);
-            return new Complex[] {new Complex(out[0], out[1]), new Complex(out[2], out[3])};
+            return RoundWireTable.TABLE.valueAndSlope(radiusOverSkinDepth);
         }
         return exactRoundWireRatioWithSlope(radiusOverSkinDepth);
     }
@@ -62,13 +60,8 @@ public final class InternalImpedance {
 
     /** Holder: built on first use, by the class loader's lock. */
     static final class RoundWireTable {
-        static final HermiteTable TABLE = new HermiteTable((x, out) -> {
-            Complex[] exact = exactRoundWireRatioWithSlope(x);
-            out[0] = exact[0].getReal();
-            out[1] = exact[0].getImaginary();
-            out[2] = exact[1].getReal();
-            out[3] = exact[1].getImaginary();
-        }, 0.01, 1000.0, ROUND_WIRE_TABLE_NODES_PER_UNIT_LOG);
+        static final HermiteTable TABLE = HermiteTable.of(InternalImpedance::exactRoundWireRatioWithSlope, 0.01,
+                1000.0, ROUND_WIRE_TABLE_NODES_PER_UNIT_LOG);
 
         private RoundWireTable() {
         }
@@ -172,14 +165,8 @@ public final class InternalImpedance {
         double dcResistance = 1.0 / (sigma * Math.PI
                 * (outerRadiusMetres - innerRadiusMetres) * (outerRadiusMetres + innerRadiusMetres));
         double x = innerRadiusMetres / conductor.skinDepthMetres(frequencyHz);
-        Complex[] ratio;
-        if (table != null && table.covers(x)) {
-            double[] out = new double[4];
-            table.evaluate(x, out);
-            ratio = new Complex[] {new Complex(out[0], out[1]), new Complex(out[2], out[3])};
-        } else {
-            ratio = tubeRatioWithSlope(x, outerRadiusMetres / innerRadiusMetres);
-        }
+        Complex[] ratio = table != null && table.covers(x) ? table.valueAndSlope(x)
+                : tubeRatioWithSlope(x, outerRadiusMetres / innerRadiusMetres);
         return scaleWithSlope(conductor, dcResistance, ratio, x, frequencyHz);
     }
 
@@ -218,13 +205,8 @@ public final class InternalImpedance {
      * per node in its range; the caller decides.
      */
     static HermiteTable tubeTable(double outerOverInnerRadius, double xMin, double xMax) {
-        return new HermiteTable((x, out) -> {
-            Complex[] exact = tubeRatioWithSlope(x, outerOverInnerRadius);
-            out[0] = exact[0].getReal();
-            out[1] = exact[0].getImaginary();
-            out[2] = exact[1].getReal();
-            out[3] = exact[1].getImaginary();
-        }, xMin, xMax, TUBE_TABLE_NODES_PER_UNIT_LOG);
+        return HermiteTable.of(x -> tubeRatioWithSlope(x, outerOverInnerRadius), xMin, xMax,
+                TUBE_TABLE_NODES_PER_UNIT_LOG);
     }
 
     /**
@@ -357,9 +339,7 @@ public final class InternalImpedance {
      */
     static Complex[] flatRatioWithSlope(double thicknessOverSkinDepth) {
         if (FlatTable.TABLE.covers(thicknessOverSkinDepth)) {
-            double[] out = new double[4];
-            FlatTable.TABLE.evaluate(thicknessOverSkinDepth, out);
-            return new Complex[] {new Complex(out[0], out[1]), new Complex(out[2], out[3])};
+            return FlatTable.TABLE.valueAndSlope(thicknessOverSkinDepth);
         }
         return exactFlatRatioWithSlope(thicknessOverSkinDepth);
     }
@@ -372,13 +352,8 @@ public final class InternalImpedance {
 
     /** Holder of the flat conductor's table: built on first use. */
     static final class FlatTable {
-        static final HermiteTable TABLE = new HermiteTable((x, out) -> {
-            Complex[] exact = exactFlatRatioWithSlope(x);
-            out[0] = exact[0].getReal();
-            out[1] = exact[0].getImaginary();
-            out[2] = exact[1].getReal();
-            out[3] = exact[1].getImaginary();
-        }, 0.01, 1000.0, ROUND_WIRE_TABLE_NODES_PER_UNIT_LOG);
+        static final HermiteTable TABLE = HermiteTable.of(InternalImpedance::exactFlatRatioWithSlope, 0.01,
+                1000.0, ROUND_WIRE_TABLE_NODES_PER_UNIT_LOG);
 
         private FlatTable() {
         }

@@ -53,9 +53,6 @@ public final class LineTwoPort {
         Complex transmission = gammaLength.negate().exp();
         Complex transmissionSquared = transmission.multiply(transmission);
         Complex launch = z0.divide(z0.add(sourceOhm));
-        if (sourceOhm.isInfinite()) {
-            launch = Complex.ZERO;
-        }
         Complex denominator = Complex.ONE.subtract(sourceReflection.multiply(loadReflection).multiply(transmissionSquared));
         Complex near = launch.multiply(Complex.ONE.add(loadReflection.multiply(transmissionSquared))).divide(denominator);
         Complex far = launch.multiply(transmission).multiply(Complex.ONE.add(loadReflection)).divide(denominator);

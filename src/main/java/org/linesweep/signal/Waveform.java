@@ -21,6 +21,13 @@ public record Waveform(double[] timeSeconds, double[] sourceVolts, double[] inpu
         double delaySeconds, double outputRiseSeconds, double overshootPercent, double settledVolts,
         List<String> warnings) {
 
+    /** The far end's read-outs in one line: "delay …, rise 10-90 % …, overshoot … %, settles to … V". */
+    public String summary() {
+        return String.format(java.util.Locale.ROOT, "delay %s, rise 10-90 %% %s, overshoot %.1f %%, settles to %.4g V",
+                org.linesweep.design.Units.engineering(delaySeconds, "s", 4),
+                org.linesweep.design.Units.engineering(outputRiseSeconds, "s", 4), overshootPercent, settledVolts);
+    }
+
     /** Number of samples. */
     public int size() {
         return timeSeconds.length;

@@ -123,7 +123,7 @@ public final class ComparePane extends VBox {
             table.refresh();
         });
         model.meetingModeProperty().addListener((o, old, now) -> {
-            palette = now ? Palette.MEETING : Palette.STANDARD;
+            palette = Palette.of(now);
             table.refresh();
         });
     }

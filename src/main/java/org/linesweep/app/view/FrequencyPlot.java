@@ -205,6 +205,12 @@ public final class FrequencyPlot extends Region {
     }
 
     /** Style for screen-sharing: thicker lines and larger text, with the given ink and paper colours. */
+    /** The look of meeting mode (thick lines, large type, its palette) or of the ordinary window. */
+    public void setMeetingLook(boolean meeting) {
+        Palette palette = Palette.of(meeting);
+        setLook(meeting ? 1.9 : 1.0, meeting ? 17 : 12, palette.ink(), palette.grid(), palette.paper());
+    }
+
     public void setLook(double lineScale, double fontSize, Color ink, Color grid, Color paper) {
         this.lineScale = lineScale;
         this.fontSize = fontSize;

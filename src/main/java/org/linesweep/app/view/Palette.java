@@ -26,6 +26,11 @@ public record Palette(Color live, Color[] pins, Color electricalLength, Color sk
             Color.web("#009E73", 0.10), Color.web("#D55E00", 0.6), Color.web("#F0E442", 0.22),
             Color.BLACK, Color.web("#b8bec6"), Color.WHITE);
 
+    /** The palette of meeting mode or of the ordinary window. */
+    public static Palette of(boolean meeting) {
+        return meeting ? MEETING : STANDARD;
+    }
+
     public Color pin(int slot) {
         return pins[slot % pins.length];
     }

@@ -25,7 +25,6 @@ final class PathSimplifier {
     private int buffered;
     private double anchorX;
     private double anchorY;
-    private int emitted;
 
     /** @param tolerancePixels largest distance of a dropped point from the drawn segment */
     PathSimplifier(double tolerancePixels) {
@@ -36,13 +35,11 @@ final class PathSimplifier {
     void start(GraphicsContext graphics) {
         this.g = graphics;
         this.buffered = 0;
-        this.emitted = 0;
     }
 
     void moveTo(double x, double y) {
         flush();
         g.moveTo(x, y);
-        emitted++;
         anchorX = x;
         anchorY = y;
     }
@@ -52,8 +49,7 @@ final class PathSimplifier {
             double endX = xs[buffered - 1];
             double endY = ys[buffered - 1];
             g.lineTo(endX, endY);
-            emitted++;
-            anchorX = endX;
+                anchorX = endX;
             anchorY = endY;
             buffered = 0;
         }
@@ -66,14 +62,8 @@ final class PathSimplifier {
     void flush() {
         if (buffered > 0) {
             g.lineTo(xs[buffered - 1], ys[buffered - 1]);
-            emitted++;
-            buffered = 0;
+                buffered = 0;
         }
-    }
-
-    /** Points sent to the path since {@link #start}. */
-    int emitted() {
-        return emitted;
     }
 
     /** True when every buffered point lies within the tolerance of the segment from the anchor to (x, y). */

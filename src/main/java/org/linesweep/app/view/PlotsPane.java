@@ -216,9 +216,9 @@ public final class PlotsPane extends GridPane {
     }
 
     private void applyLook(boolean meeting) {
-        palette = meeting ? Palette.MEETING : Palette.STANDARD;
+        palette = Palette.of(meeting);
         for (FrequencyPlot plot : plots()) {
-            plot.setLook(meeting ? 1.9 : 1.0, meeting ? 17 : 12, palette.ink(), palette.grid(), palette.paper());
+            plot.setMeetingLook(meeting);
         }
         redraw();
     }

@@ -2,7 +2,6 @@ package org.linesweep.app.view;
 
 import java.util.ArrayList;
 import java.util.List;
-import java.util.Locale;
 import java.util.concurrent.CompletableFuture;
 import java.util.concurrent.Executor;
 import java.util.concurrent.atomic.AtomicLong;
@@ -25,7 +24,6 @@ import org.linesweep.app.model.ExplorerModel;
 import org.linesweep.design.Design;
 import org.linesweep.design.InvalidInputException;
 import org.linesweep.design.Rule;
-import org.linesweep.design.Units;
 import org.linesweep.signal.WaveShape;
 import org.linesweep.signal.Waveform;
 import org.linesweep.signal.WaveformSettings;
@@ -151,10 +149,9 @@ public final class WaveformPane extends HBox {
         });
         updateShapeFields();
         model.snapshotProperty().addListener((o, old, now) -> recompute());
+        plot.setMeetingLook(model.meetingModeProperty().get());
         model.meetingModeProperty().addListener((o, old, now) -> {
-            boolean meeting = Boolean.TRUE.equals(now);
-            Palette palette = meeting ? Palette.MEETING : Palette.STANDARD;
-            plot.setLook(meeting ? 1.9 : 1.0, meeting ? 17 : 12, palette.ink(), palette.grid(), palette.paper());
+            plot.setMeetingLook(now);
             draw();
         });
     }
@@ -261,7 +258,7 @@ public final class WaveformPane extends HBox {
         if (w == null || w.size() < 2) {
             return;
         }
-        Palette palette = Boolean.TRUE.equals(model.meetingModeProperty().get()) ? Palette.MEETING : Palette.STANDARD;
+        Palette palette = Palette.of(model.meetingModeProperty().get());
         double[] time = w.timeSeconds();
         plot.setFrequencyRange(time[0], time[time.length - 1]);
         List<PlotSeries> series = new ArrayList<>();
@@ -272,9 +269,7 @@ public final class WaveformPane extends HBox {
         series.add(new PlotSeries("far end (load)", time, w.outputVolts(), w.size(), palette.live(), 2.2,
                 new double[0], false));
         plot.setSeries(series);
-        readout.setText(String.format(Locale.ROOT, "Far end: delay %s, rise 10-90 %% %s, overshoot %.1f %%,"
-                        + " settles to %.4g V", Units.engineering(w.delaySeconds(), "s", 4),
-                Units.engineering(w.outputRiseSeconds(), "s", 4), w.overshootPercent(), w.settledVolts()));
+        readout.setText("Far end: " + w.summary());
         warnings.setText(String.join("\n", w.warnings()));
     }
 }
