@@ -50,6 +50,7 @@ public final class WaveformPane extends HBox {
     private final TextField load = field("wave-load", "50", 5);
     private final TextField capacitance = field("wave-load-pf", "0", 4);
     private final TextField duration = field("wave-duration", "", 6);
+    private final javafx.scene.control.ScrollPane controlsScroll = new javafx.scene.control.ScrollPane();
     private final Label readout = new Label("");
     private final Label warnings = new Label("");
     private final Label message = new Label("");
@@ -129,11 +130,9 @@ public final class WaveformPane extends HBox {
         controls.setMinWidth(280);
         HBox.setHgrow(plot, Priority.ALWAYS);
         plot.setMinWidth(300);
-        javafx.scene.control.ScrollPane controlsScroll = new javafx.scene.control.ScrollPane(controls);
+        controlsScroll.setContent(controls);
         controlsScroll.setFitToWidth(true);
         controlsScroll.setHbarPolicy(javafx.scene.control.ScrollPane.ScrollBarPolicy.NEVER);
-        controlsScroll.setPrefWidth(345);
-        controlsScroll.setMinWidth(290);
         getChildren().addAll(controlsScroll, plot);
         for (TextField field : List.of(rise, width, period, source, load, capacitance, duration)) {
             field.setOnAction(e -> commit());
@@ -149,11 +148,18 @@ public final class WaveformPane extends HBox {
         });
         updateShapeFields();
         model.snapshotProperty().addListener((o, old, now) -> recompute());
-        plot.setMeetingLook(model.meetingModeProperty().get());
+        applyLook(model.meetingModeProperty().get());
         model.meetingModeProperty().addListener((o, old, now) -> {
-            plot.setMeetingLook(now);
+            applyLook(now);
             draw();
         });
+    }
+
+    /** Meeting mode's larger type needs a wider column of inputs, as the design panel does. */
+    private void applyLook(boolean meeting) {
+        plot.setMeetingLook(meeting);
+        controlsScroll.setPrefWidth(meeting ? 470 : 345);
+        controlsScroll.setMinWidth(meeting ? 400 : 290);
     }
 
     private static TextField field(String id, String text, int columns) {
