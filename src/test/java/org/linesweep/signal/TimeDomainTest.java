@@ -64,7 +64,7 @@ class TimeDomainTest {
      * ΓL = (RL − Z0)/(RL + Z0) and V1 = Z0/(Z0 + Rs), the far end after the n-th arrival (time (2n+1)τ) holds
      * V1·(1 + ΓL)·Σ_{k<=n} (ΓsΓL)^k and the near end after time 2nτ holds
      * V1·[1 + (1 + Γs)·ΓL·Σ_{k<n} (ΓsΓL)^k] (e.g. Bakoglu, Circuits, Interconnections and Packaging for VLSI,
-     * 1990, ch. 6; any lattice-diagram text).
+     * 1990, the chapter on transmission-line effects, from memory; any lattice-diagram text).
      */
     @Test
     void mismatchedLosslessLineFollowsTheBounceDiagram() {
