@@ -20,8 +20,6 @@ public final class CoaxLine extends HomogeneousTemLine {
     private final double outerWallMetres;
     private final double capacitanceFactor;
     private volatile double cachedTe11Hz = Double.NaN;
-    /** The outer tube's Z/R_dc tabulated for this line's c/b over a sweep's range; null until a sweep asks. */
-    private volatile HermiteTable tubeTable;
 
     /**
      * @param innerDiameterMetres diameter 2a of the inner conductor
@@ -35,50 +33,15 @@ public final class CoaxLine extends HomogeneousTemLine {
         this.outerRadiusMetres = outerDiameterMetres / 2;
         this.outerWallMetres = outerThicknessMetres;
         this.capacitanceFactor = 2 * Math.PI / Math.log1p((outerRadiusMetres - innerRadiusMetres) / innerRadiusMetres);
+        // the outer tube tabulates its thin-wall range per sweep (see SkinEffectTerm#prepareForSweep)
+        setConductorTerms(SkinEffectTerm.roundWire(conductor, innerRadiusMetres, 1.0, 1.0),
+                SkinEffectTerm.tube(conductor, outerRadiusMetres, outerRadiusMetres + outerWallMetres));
     }
 
     @Override
     protected String geometryText() {
         return "a=" + innerRadiusMetres + " b=" + outerRadiusMetres + " wall=" + outerWallMetres;
     }
-
-    /**
-     * Tabulates the outer tube over the sweep's thin-wall range (b/δ below 20 skin depths of wall) when the
-     * sweep has at least {@link #POINTS_PER_TUBE_NODE} points there per table node (a node costs one exact
-     * evaluation, a lookup a fortieth of one), reusing a recent table of the same c/b when it covers the range.
-     */
-    @Override
-    public void prepareForSweep(double[] frequenciesHz, int count) {
-        if (conductor.isPerfect()) {
-            return;
-        }
-        double kappa = (outerRadiusMetres + outerWallMetres) / outerRadiusMetres;
-        double thickLimit = InternalImpedance.THICK_WALL_SKIN_DEPTHS / (kappa - 1.0);
-        double low = Double.POSITIVE_INFINITY;
-        double high = 0.0;
-        int inside = 0;
-        for (int i = 0; i < count; i++) {
-            double x = outerRadiusMetres / conductor.skinDepthMetres(frequenciesHz[i]);
-            if (x <= thickLimit && x >= TUBE_TABLE_SMALLEST_X) {
-                inside++;
-                low = Math.min(low, x);
-                high = Math.max(high, x);
-            }
-        }
-        HermiteTable existing = tubeTable;
-        if (inside < 2 || !(high > low) || (existing != null && existing.covers(low) && existing.covers(high))) {
-            return;
-        }
-        double nodes = Math.log(high / low) * InternalImpedance.TUBE_TABLE_NODES_PER_UNIT_LOG + 1;
-        if (nodes * POINTS_PER_TUBE_NODE <= inside) {
-            tubeTable = InternalImpedance.sharedTubeTable(kappa, low, high);
-        }
-    }
-
-    /** A tube table is built only for sweeps with at least this many thin-wall points per node. */
-    static final double POINTS_PER_TUBE_NODE = 1.5;
-    /** Below b/δ = 0.01 the tube is at its DC value to 1e-9; the exact form is cheap there. */
-    static final double TUBE_TABLE_SMALLEST_X = 0.01;
 
     @Override
     public LineType type() {
@@ -88,14 +51,6 @@ public final class CoaxLine extends HomogeneousTemLine {
     @Override
     public double capacitanceFactor() {
         return capacitanceFactor;
-    }
-
-    @Override
-    public Complex[] conductorImpedanceWithSlope(double frequencyHz) {
-        Complex[] inner = InternalImpedance.roundWireWithSlope(conductor, innerRadiusMetres, frequencyHz);
-        Complex[] outer = InternalImpedance.tubeWithSlope(conductor, outerRadiusMetres,
-                outerRadiusMetres + outerWallMetres, frequencyHz, tubeTable);
-        return new Complex[] {inner[0].add(outer[0]), inner[1].add(outer[1])};
     }
 
     @Override

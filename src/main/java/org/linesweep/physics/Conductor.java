@@ -56,17 +56,6 @@ public record Conductor(double conductivityAt20CSiemensPerMetre, double temperat
         return 1.0 / (conductivitySiemensPerMetre() * skinDepthMetres(frequencyHz));
     }
 
-    /**
-     * dK/dω of Hammerstad's roughness factor: with r² = (Δ/δ)² ∝ ω, dK/dω = (2/π)·1.4·(r²/ω)/(1 + (1.4 r²)²).
-     */
-    public double roughnessFactorSlope(double frequencyHz) {
-        if (roughnessRmsMetres <= 0 || isPerfect()) {
-            return 0.0;
-        }
-        double ratio = roughnessRmsMetres / skinDepthMetres(frequencyHz);
-        double u = 1.4 * ratio * ratio;
-        return (2.0 / Math.PI) * u / (2 * Math.PI * frequencyHz) / (1.0 + u * u);
-    }
 
     /**
      * Hammerstad's roughness factor K = 1 + (2/π)·atan(1.4·(Δ/δ)²) (E. Hammerstad and Ø. Jensen,

@@ -21,13 +21,18 @@ final class HermiteTable {
     }
 
     private final double firstU;
+    private final double lastU;
     private final double step;
+    private final double inverseStep;
     private final double lastX;
     private final double firstX;
-    private final double[] valueRe;
-    private final double[] valueIm;
-    private final double[] slopeRe;
-    private final double[] slopeIm;
+    private final int lastCell;
+    /**
+     * Per cell between nodes k and k + 1, the cubic in t = (u − u_k)/step that the Hermite interpolant is, for the
+     * real then the imaginary part: {re0, re1, re2, re3, im0, im1, im2, im3}, so a lookup reads one contiguous
+     * run of eight numbers and evaluates two short polynomials.
+     */
+    private final double[] cells;
 
     /**
      * Builds the table over [xMin, xMax] (the ends are nodes).
@@ -38,24 +43,43 @@ final class HermiteTable {
         double span = Math.log(xMax / xMin);
         int intervals = Math.max(1, (int) Math.ceil(span * nodesPerUnitLog));
         this.firstU = Math.log(xMin);
+        this.lastU = Math.log(xMax);
         this.step = span / intervals;
+        this.inverseStep = intervals / span;
         this.firstX = xMin;
         this.lastX = xMax;
+        this.lastCell = intervals - 1;
         int nodes = intervals + 1;
-        valueRe = new double[nodes];
-        valueIm = new double[nodes];
-        slopeRe = new double[nodes];
-        slopeIm = new double[nodes];
+        double[] valueRe = new double[nodes];
+        double[] valueIm = new double[nodes];
+        double[] slopeRe = new double[nodes];
+        double[] slopeIm = new double[nodes];
         double[] out = new double[4];
         for (int i = 0; i < nodes; i++) {
             double x = i == intervals ? xMax : Math.exp(firstU + i * step);
             source.evaluate(x, out);
             valueRe[i] = out[0];
             valueIm[i] = out[1];
-            // dG/du = x·F′(x)
-            slopeRe[i] = x * out[2];
-            slopeIm[i] = x * out[3];
+            // dG/du = x·F′(x), times the step: the slope per unit of t
+            slopeRe[i] = x * out[2] * step;
+            slopeIm[i] = x * out[3] * step;
         }
+        cells = new double[8 * intervals];
+        for (int k = 0; k < intervals; k++) {
+            cubic(valueRe[k], slopeRe[k], valueRe[k + 1], slopeRe[k + 1], cells, 8 * k);
+            cubic(valueIm[k], slopeIm[k], valueIm[k + 1], slopeIm[k + 1], cells, 8 * k + 4);
+        }
+    }
+
+    /**
+     * The cubic c0 + c1·t + c2·t² + c3·t³ on t ∈ [0, 1] with the given end values p0, p1 and end slopes m0, m1
+     * (per unit of t): the cubic Hermite interpolant written in powers of t.
+     */
+    private static void cubic(double p0, double m0, double p1, double m1, double[] into, int at) {
+        into[at] = p0;
+        into[at + 1] = m0;
+        into[at + 2] = -3 * p0 - 2 * m0 + 3 * p1 - m1;
+        into[at + 3] = 2 * p0 + m0 - 2 * p1 + m1;
     }
 
     /**
@@ -91,26 +115,39 @@ final class HermiteTable {
      * @param out receives {Re F, Im F, Re F′, Im F′}
      */
     void evaluate(double x, double[] out) {
-        double s = (Math.log(x) - firstU) / step;
-        int i = Math.min(valueRe.length - 2, Math.max(0, (int) s));
-        double t = s - i;
-        double t2 = t * t;
-        double t3 = t2 * t;
-        double h00 = 2 * t3 - 3 * t2 + 1;
-        double h10 = (t3 - 2 * t2 + t) * step;
-        double h01 = -2 * t3 + 3 * t2;
-        double h11 = (t3 - t2) * step;
-        // derivatives of the basis with respect to t, divided by the step to give d/du
-        double d00 = (6 * t2 - 6 * t) / step;
-        double d10 = 3 * t2 - 4 * t + 1;
-        double d01 = (-6 * t2 + 6 * t) / step;
-        double d11 = 3 * t2 - 2 * t;
-        out[0] = h00 * valueRe[i] + h10 * slopeRe[i] + h01 * valueRe[i + 1] + h11 * slopeRe[i + 1];
-        out[1] = h00 * valueIm[i] + h10 * slopeIm[i] + h01 * valueIm[i + 1] + h11 * slopeIm[i + 1];
-        double duRe = d00 * valueRe[i] + d10 * slopeRe[i] + d01 * valueRe[i + 1] + d11 * slopeRe[i + 1];
-        double duIm = d00 * valueIm[i] + d10 * slopeIm[i] + d01 * valueIm[i + 1] + d11 * slopeIm[i + 1];
+        evaluateLog(Math.log(x), out);
         // F′(x) = (dG/du)/x
-        out[2] = duRe / x;
-        out[3] = duIm / x;
+        out[2] /= x;
+        out[3] /= x;
+    }
+
+    /** True when u = ln x lies inside the table. */
+    boolean coversLog(double u) {
+        return u >= firstU && u <= lastU;
+    }
+
+    /**
+     * Interpolates G(u) = F(e^u) and dG/du at u = ln x, which must be {@linkplain #coversLog covered}: the form a
+     * sweep wants, since it knows ln f and its quantities depend on ln x linearly (x ∝ f or x ∝ sqrt f), so no
+     * logarithm or division per lookup.
+     *
+     * @param out receives {Re G, Im G, Re dG/du, Im dG/du}
+     */
+    void evaluateLog(double u, double[] out) {
+        double s = (u - firstU) * inverseStep;
+        int cell = Math.min(lastCell, Math.max(0, (int) s));
+        double t = s - cell;
+        int at = 8 * cell;
+        double[] c = cells;
+        double re1 = c[at + 1];
+        double re2 = c[at + 2];
+        double re3 = c[at + 3];
+        double im1 = c[at + 5];
+        double im2 = c[at + 6];
+        double im3 = c[at + 7];
+        out[0] = c[at] + t * (re1 + t * (re2 + t * re3));
+        out[1] = c[at + 4] + t * (im1 + t * (im2 + t * im3));
+        out[2] = (re1 + t * (2 * re2 + t * 3 * re3)) * inverseStep;
+        out[3] = (im1 + t * (2 * im2 + t * 3 * im3)) * inverseStep;
     }
 }

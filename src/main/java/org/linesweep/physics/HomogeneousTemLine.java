@@ -11,8 +11,25 @@ import org.apache.commons.math3.complex.Complex;
  */
 public abstract class HomogeneousTemLine extends LineModel {
 
+    /** The conductors' shares of the internal impedance; empty for a perfect conductor. */
+    private SkinEffectTerm[] conductorTerms = new SkinEffectTerm[0];
+
     protected HomogeneousTemLine(Conductor conductor, Dielectric dielectric) {
         super(conductor, dielectric);
+    }
+
+    /** Sets the conductors' shares of the internal impedance, from the subclass's constructor; none if perfect. */
+    final void setConductorTerms(SkinEffectTerm... terms) {
+        this.conductorTerms = conductor.isPerfect() ? new SkinEffectTerm[0] : terms.clone();
+    }
+
+    /** Prepares the dielectric's and the conductors' tables for the sweep (see {@link LineModel#prepareForSweep}). */
+    @Override
+    public void prepareForSweep(double[] frequenciesHz, int count) {
+        super.prepareForSweep(frequenciesHz, count);
+        for (SkinEffectTerm term : conductorTerms) {
+            term.prepareForSweep(frequenciesHz, count);
+        }
     }
 
     /** The capacitance per unit permittivity F = C'/ε of the geometry. */
@@ -20,11 +37,22 @@ public abstract class HomogeneousTemLine extends LineModel {
 
     /** The internal impedance of all conductors per metre of line at f, Ω/m. */
     public Complex conductorImpedance(double frequencyHz) {
-        return conductorImpedanceWithSlope(frequencyHz)[0];
+        LineParameters p = new LineParameters();
+        p.setFrequency(frequencyHz);
+        beginPoint(p);
+        addConductorImpedance(p);
+        return new Complex(p.impedanceRe, p.impedanceIm);
     }
 
-    /** The conductors' internal impedance per metre and its derivative with respect to ω: {Z, dZ/dω}. */
-    public abstract Complex[] conductorImpedanceWithSlope(double frequencyHz);
+    /**
+     * Adds the internal impedance per metre of every conductor, and its derivative with respect to ω, at the
+     * point {@code p} describes (see {@link SkinEffectTerm#addTo}); nothing for a perfect conductor.
+     */
+    private void addConductorImpedance(LineParameters p) {
+        for (SkinEffectTerm term : conductorTerms) {
+            term.addTo(p);
+        }
+    }
 
     @Override
     public void evaluate(double frequencyHz, LineParameters out) {
@@ -37,24 +65,28 @@ public abstract class HomogeneousTemLine extends LineModel {
      * R'_ω = Re dZ/dω, L'_ω = Im(dZ/dω)/ω − Im Z/ω².
      */
     @Override
-    public void evaluateWithSlopes(double frequencyHz, LineParameters out) {
-        double omega = 2 * Math.PI * frequencyHz;
+    public void evaluatePoint(LineParameters out) {
+        beginPoint(out);
+        addConductorImpedance(out);
+        permittivity.evaluate(out);
+        double omega = out.omega;
+        double inverseOmega = out.inverseOmega;
         double factor = capacitanceFactor();
-        double eps0 = PhysicalConstants.VACUUM_PERMITTIVITY_FARAD_PER_METRE;
-        double realPermittivity = permittivity.real(frequencyHz);
-        double imaginaryPermittivity = permittivity.imaginary(frequencyHz);
-        Complex[] internal = conductorImpedanceWithSlope(frequencyHz);
+        double eps0Factor = PhysicalConstants.VACUUM_PERMITTIVITY_FARAD_PER_METRE * factor;
+        double realPermittivity = out.permittivityRe;
+        double imaginaryPermittivity = out.permittivityIm;
         double externalInductance = PhysicalConstants.VACUUM_PERMEABILITY_HENRY_PER_METRE
                 * dielectric.relativePermeability() / factor;
-        out.set(internal[0].getReal(),
-                externalInductance + internal[0].getImaginary() / omega,
-                (omega * eps0 * imaginaryPermittivity + permittivity.conductivity()) * factor,
-                eps0 * realPermittivity * factor,
+        double internalIm = out.impedanceIm;
+        out.set(out.impedanceRe,
+                externalInductance + internalIm * inverseOmega,
+                omega * eps0Factor * imaginaryPermittivity + permittivity.conductivity() * factor,
+                eps0Factor * realPermittivity,
                 realPermittivity);
-        out.setSlopes(internal[1].getReal(),
-                internal[1].getImaginary() / omega - internal[0].getImaginary() / (omega * omega),
-                eps0 * factor * (imaginaryPermittivity + omega * permittivity.imaginarySlope(frequencyHz)),
-                eps0 * factor * permittivity.realSlope(frequencyHz));
+        out.setSlopes(out.impedanceReSlope,
+                (out.impedanceImSlope - internalIm * inverseOmega) * inverseOmega,
+                eps0Factor * (imaginaryPermittivity + omega * out.permittivityImSlope),
+                eps0Factor * out.permittivityReSlope);
     }
 
     /** Lossless characteristic impedance η/F at f, Ω (ignoring conductor and dielectric loss). */

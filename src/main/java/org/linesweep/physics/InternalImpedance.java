@@ -80,25 +80,6 @@ public final class InternalImpedance {
         return new Complex[] {ratio, slope};
     }
 
-    /**
-     * A conductor impedance Z(ω) = R_dc·K(ω)·F(x(ω)) with x ∝ sqrt(ω) and Hammerstad's K, and its derivative
-     * dZ/dω = R_dc·[K′·F + K·F′(x)·x/(2ω)].
-     *
-     * @param dcResistance R_dc (Ω/m or Ω per square)
-     * @param ratioAndSlope {F, dF/dx}
-     * @param x the argument of F (r/δ or t/δ)
-     * @return {Z, dZ/dω}
-     */
-    static Complex[] scaleWithSlope(Conductor conductor, double dcResistance, Complex[] ratioAndSlope, double x,
-            double frequencyHz) {
-        double omega = 2 * Math.PI * frequencyHz;
-        double roughness = conductor.roughnessFactor(frequencyHz);
-        double roughnessSlope = conductor.roughnessFactorSlope(frequencyHz);
-        Complex value = ratioAndSlope[0].multiply(dcResistance * roughness);
-        Complex slope = ratioAndSlope[0].multiply(roughnessSlope)
-                .add(ratioAndSlope[1].multiply(roughness * x / (2 * omega))).multiply(dcResistance);
-        return new Complex[] {value, slope};
-    }
 
     /**
      * Internal impedance per metre of a solid round wire of the given radius, including Hammerstad's
@@ -133,42 +114,18 @@ public final class InternalImpedance {
             return new Complex(1.0 / (conductor.conductivitySiemensPerMetre() * Math.PI
                     * (outerRadiusMetres - innerRadiusMetres) * (outerRadiusMetres + innerRadiusMetres)));
         }
-        return tubeWithSlope(conductor, innerRadiusMetres, outerRadiusMetres, frequencyHz)[0];
-    }
-
-    /** The round wire's internal impedance per metre and its derivative with respect to ω. */
-    public static Complex[] roundWireWithSlope(Conductor conductor, double radiusMetres, double frequencyHz) {
         if (conductor.isPerfect()) {
-            return new Complex[] {Complex.ZERO, Complex.ZERO};
+            return Complex.ZERO;
         }
-        double dcResistance = 1.0 / (conductor.conductivitySiemensPerMetre() * Math.PI * radiusMetres * radiusMetres);
-        double x = radiusMetres / conductor.skinDepthMetres(frequencyHz);
-        return scaleWithSlope(conductor, dcResistance, roundWireRatioWithSlope(x), x, frequencyHz);
-    }
-
-    /** The tube's internal impedance per metre and its derivative with respect to ω. */
-    public static Complex[] tubeWithSlope(Conductor conductor, double innerRadiusMetres, double outerRadiusMetres,
-            double frequencyHz) {
-        return tubeWithSlope(conductor, innerRadiusMetres, outerRadiusMetres, frequencyHz, null);
-    }
-
-    /**
-     * The tube's internal impedance and slope, reading Z/R_dc from a table of this tube's c/b where it covers
-     * b/δ (see {@link #tubeTable}).
-     */
-    static Complex[] tubeWithSlope(Conductor conductor, double innerRadiusMetres, double outerRadiusMetres,
-            double frequencyHz, HermiteTable table) {
-        if (conductor.isPerfect()) {
-            return new Complex[] {Complex.ZERO, Complex.ZERO};
-        }
-        double sigma = conductor.conductivitySiemensPerMetre();
-        double dcResistance = 1.0 / (sigma * Math.PI
+        double dcResistance = 1.0 / (conductor.conductivitySiemensPerMetre() * Math.PI
                 * (outerRadiusMetres - innerRadiusMetres) * (outerRadiusMetres + innerRadiusMetres));
         double x = innerRadiusMetres / conductor.skinDepthMetres(frequencyHz);
-        Complex[] ratio = table != null && table.covers(x) ? table.valueAndSlope(x)
-                : tubeRatioWithSlope(x, outerRadiusMetres / innerRadiusMetres);
-        return scaleWithSlope(conductor, dcResistance, ratio, x, frequencyHz);
+        return tubeRatio(x, outerRadiusMetres / innerRadiusMetres)
+                .multiply(dcResistance * conductor.roughnessFactor(frequencyHz));
     }
+
+
+
 
     /** Nodes per unit of ln(b/δ) in a tube table. */
     static final int TUBE_TABLE_NODES_PER_UNIT_LOG = 128;
@@ -266,14 +223,37 @@ public final class InternalImpedance {
      * K1′ = −K0 − K1/z).
      */
     static Complex[] thickTubeRatioWithSlope(double innerRadiusOverSkinDepth, double kappa) {
+        double areaFactor = (kappa - 1.0) * (kappa + 1.0);
+        Complex[] unit = thickTubeUnitRatioWithSlope(innerRadiusOverSkinDepth);
+        return new Complex[] {unit[0].multiply(areaFactor), unit[1].multiply(areaFactor)};
+    }
+
+    /**
+     * The thick-walled tube's Z/R_dc divided by (c/b)² − 1, T₁ = (z_b/2)·K0(z_b)/K1(z_b), and its derivative in
+     * b/δ: a function of b/δ alone, so one shared table serves every thick-walled tube.
+     */
+    static Complex[] thickTubeUnitRatioWithSlope(double innerRadiusOverSkinDepth) {
         Complex gb = ONE_PLUS_J.multiply(innerRadiusOverSkinDepth);
         Complex[] kb = SpecialFunctions.scaledK(gb);
         Complex q = kb[0].divide(kb[1]);
-        double areaFactor = (kappa - 1.0) * (kappa + 1.0);
-        Complex ratio = gb.multiply(0.5 * areaFactor).multiply(q);
+        Complex ratio = gb.multiply(0.5).multiply(q);
         Complex qSlope = q.multiply(q).add(q.divide(gb)).subtract(1.0);
-        Complex slopeInZ = q.add(gb.multiply(qSlope)).multiply(0.5 * areaFactor);
+        Complex slopeInZ = q.add(gb.multiply(qSlope)).multiply(0.5);
         return new Complex[] {ratio, slopeInZ.multiply(ONE_PLUS_J)};
+    }
+
+    /**
+     * Holder of the thick-walled tube's table, T₁ from b/δ = 0.5 to 10⁵ at {@link #TUBE_TABLE_NODES_PER_UNIT_LOG}
+     * nodes per unit of ln(b/δ) (a wall thicker than 20 skin depths means b/δ above 20/(c/b − 1), so every
+     * practical wall ratio falls inside; outside, the exact form serves). Built on first use, a few
+     * milliseconds.
+     */
+    static final class ThickTubeTable {
+        static final HermiteTable TABLE = HermiteTable.of(InternalImpedance::thickTubeUnitRatioWithSlope, 0.5, 1e5,
+                TUBE_TABLE_NODES_PER_UNIT_LOG);
+
+        private ThickTubeTable() {
+        }
     }
 
     /**
@@ -312,25 +292,6 @@ public final class InternalImpedance {
         return flatRatioWithSlope(thicknessMetres / delta)[0].multiply(roughness / (sigma * thicknessMetres));
     }
 
-    /**
-     * The flat conductor's surface impedance and its derivative with respect to ω; an infinite thickness gives
-     * the thick-conductor (1 + j)Rs.
-     */
-    public static Complex[] flatSurfaceWithSlope(Conductor conductor, double thicknessMetres, double frequencyHz) {
-        if (conductor.isPerfect()) {
-            return new Complex[] {Complex.ZERO, Complex.ZERO};
-        }
-        double sigma = conductor.conductivitySiemensPerMetre();
-        double delta = conductor.skinDepthMetres(frequencyHz);
-        if (Double.isInfinite(thicknessMetres)) {
-            // Z = (1 + j)/(σδ)·K: (1 + j)·x with x = 1/δ ∝ sqrt(ω), R_dc-like factor 1/σ
-            double x = 1.0 / delta;
-            return scaleWithSlope(conductor, 1.0 / sigma, new Complex[] {ONE_PLUS_J.multiply(x), ONE_PLUS_J}, x,
-                    frequencyHz);
-        }
-        double x = thicknessMetres / delta;
-        return scaleWithSlope(conductor, 1.0 / (sigma * thicknessMetres), flatRatioWithSlope(x), x, frequencyHz);
-    }
 
     /**
      * A flat conductor's Z_s/R_dc = u·coth u with u = (1 + j)·t/δ, and its derivative in t/δ: a function of t/δ

@@ -84,13 +84,84 @@ public final class MicrostripFormulas {
      */
     public static double dispersiveEffectivePermittivity(double staticEffective, double u,
             double relativePermittivity, double frequencyTimesHeight) {
-        double fn = frequencyTimesHeight * 1e-6; // GHz·mm
-        double p1 = 0.27488 + (0.6315 + 0.525 / Math.pow(1.0 + 0.0157 * fn, 20)) * u
-                - 0.065683 * Math.exp(-8.7513 * u);
-        double p2 = 0.33622 * (1.0 - Math.exp(-0.03442 * relativePermittivity));
-        double p3 = 0.0363 * Math.exp(-4.6 * u) * (1.0 - Math.exp(-Math.pow(fn / 38.7, 4.97)));
-        double p4 = 1.0 + 2.751 * (1.0 - Math.exp(-Math.pow(relativePermittivity / 15.916, 8)));
-        double p = p1 * p2 * Math.pow((0.1844 + p3 * p4) * fn, 1.5763);
-        return relativePermittivity - (relativePermittivity - staticEffective) / (1.0 + p);
+        double[] out = new double[4];
+        new Dispersion(u).evaluate(staticEffective, relativePermittivity, frequencyTimesHeight * 1e-6,
+                Math.log(frequencyTimesHeight * 1e-6), out);
+        return out[0];
     }
+
+    /**
+     * Kirschning-Jansen dispersion for one strip width u = w/h, with the terms in u alone worked out once:
+     * <pre>ε_eff(f) = εr − (εr − ε_eff(0))/(1 + P),   P = P1·P2·((0.1844 + P3·P4)·fn)^1.5763</pre>
+     * with fn = f·h in GHz·mm and P1(u, fn), P2(εr), P3(u, fn), P4(εr) as in the 1982 letter, and its partial
+     * derivatives in fn, εr and ε_eff(0) in closed form (each P's derivative by the chain rule), so a sweep
+     * needs one evaluation a point and no numerical difference. Immutable.
+     */
+    static final class Dispersion {
+        private static final double EXPONENT = 1.5763;
+        private final double u;
+        /** 0.27488 + 0.6315u − 0.065683·e^(−8.7513u): P1 without its fn-dependent part. */
+        private final double p1Base;
+        /** 0.0363·e^(−4.6u). */
+        private final double p3Scale;
+
+        Dispersion(double u) {
+            this.u = u;
+            this.p1Base = 0.27488 + 0.6315 * u - 0.065683 * Math.exp(-8.7513 * u);
+            this.p3Scale = 0.0363 * Math.exp(-4.6 * u);
+        }
+
+        /**
+         * @param fn f·h in GHz·mm, &gt; 0
+         * @param logFn ln fn (the sweep knows ln f, so this costs no logarithm)
+         * @param out receives {ε_eff, ∂ε_eff/∂fn, ∂ε_eff/∂εr, ∂ε_eff/∂ε_eff(0)}
+         */
+        void evaluate(double staticEffective, double relativePermittivity, double fn, double logFn, double[] out) {
+            double er = relativePermittivity;
+            double inverseFn = Math.exp(-logFn);
+            // P1 = p1Base + 0.525u/(1 + 0.0157fn)^20
+            double inverseBase = 1.0 / (1.0 + 0.0157 * fn);
+            double b2 = inverseBase * inverseBase;
+            double b4 = b2 * b2;
+            double b16 = b4 * b4 * b4 * b4;
+            double inverse20 = b16 * b4;
+            double p1 = p1Base + 0.525 * u * inverse20;
+            double p1Fn = -0.525 * u * 20.0 * 0.0157 * inverse20 * inverseBase;
+            // P2 = 0.33622(1 − e^(−0.03442εr))
+            double e2 = Math.exp(-0.03442 * er);
+            double p2 = 0.33622 * (1.0 - e2);
+            double p2Er = 0.33622 * 0.03442 * e2;
+            // P3 = p3Scale·(1 − e^(−w)), w = (fn/38.7)^4.97
+            double w = Math.exp(4.97 * (logFn - LN_38_7));
+            double ew = Math.exp(-w);
+            double p3 = p3Scale * (1.0 - ew);
+            double p3Fn = p3Scale * ew * 4.97 * w * inverseFn;
+            // P4 = 1 + 2.751(1 − e^(−y)), y = (εr/15.916)^8, dy/dεr = 8y/εr = 8r⁷/15.916
+            double r = er / 15.916;
+            double r2 = r * r;
+            double r4 = r2 * r2;
+            double y = r4 * r4;
+            double ey = Math.exp(-y);
+            double p4 = 1.0 + 2.751 * (1.0 - ey);
+            double p4Er = 2.751 * ey * 8.0 * r4 * r2 * r / 15.916;
+            // X = (Q·fn)^1.5763, Q = 0.1844 + P3·P4
+            double q = 0.1844 + p3 * p4;
+            double inverseQ = 1.0 / q;
+            double x = Math.exp(EXPONENT * (Math.log(q) + logFn));
+            double xFn = EXPONENT * x * (p3Fn * p4 * inverseQ + inverseFn);
+            double xEr = EXPONENT * x * p3 * p4Er * inverseQ;
+            double p = p1 * p2 * x;
+            double pFn = p2 * (p1Fn * x + p1 * xFn);
+            double pEr = p1 * (p2Er * x + p2 * xEr);
+            double inverseOnePlusP = 1.0 / (1.0 + p);
+            double excess = er - staticEffective;
+            double effectiveP = excess * inverseOnePlusP * inverseOnePlusP;
+            out[0] = er - excess * inverseOnePlusP;
+            out[1] = effectiveP * pFn;
+            out[2] = 1.0 - inverseOnePlusP + effectiveP * pEr;
+            out[3] = inverseOnePlusP;
+        }
+    }
+
+    private static final double LN_38_7 = Math.log(38.7);
 }

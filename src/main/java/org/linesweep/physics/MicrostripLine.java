@@ -38,6 +38,15 @@ public final class MicrostripLine extends LineModel {
      * tabulated over a sweep's range of ε′(f) when the dielectric is dispersive; null otherwise.
      */
     private volatile HermiteTable staticTable;
+    private final MicrostripFormulas.Dispersion dispersion;
+    private static final double INVERSE_SPEED_OF_LIGHT = 1.0 / PhysicalConstants.SPEED_OF_LIGHT_METRES_PER_SECOND;
+    /** σ_d/ε0 of the substrate, 1/s. */
+    private final double conductivityOverVacuumPermittivity;
+    /** h in units of 1e6 m, so that f·h is Kirschning-Jansen's fn in GHz·mm; and its logarithm. */
+    private final double heightMegametres;
+    private final double logHeightMegametres;
+    /** Strip and ground's internal impedance; null for a perfect conductor. */
+    private final SkinEffectTerm conductorTerm;
 
     public MicrostripLine(double widthMetres, double heightMetres, double thicknessMetres, Conductor conductor,
             Dielectric dielectric) {
@@ -53,8 +62,15 @@ public final class MicrostripLine extends LineModel {
         this.groundDerivativeOhmPerMetre =
                 (MicrostripFormulas.airImpedance(widthMetres, heightMetres + dn, thicknessMetres)
                 - MicrostripFormulas.airImpedance(widthMetres, heightMetres - dn, thicknessMetres)) / (2 * dn);
-        this.constantStatic = dielectric.model() == DielectricModelKind.CONSTANT
-                ? staticAt(dielectric.relativePermittivity()) : null;
+        this.constantStatic = permittivity.isConstant() ? staticAt(dielectric.relativePermittivity()) : null;
+        this.dispersion = new MicrostripFormulas.Dispersion(widthMetres / heightMetres);
+        this.conductivityOverVacuumPermittivity = permittivity.conductivity()
+                / PhysicalConstants.VACUUM_PERMITTIVITY_FARAD_PER_METRE;
+        this.heightMegametres = heightMetres * 1e-6;
+        this.logHeightMegametres = Math.log(heightMegametres);
+        // strip and ground, each the same foil, weighted by Wheeler's rule
+        this.conductorTerm = conductor.isPerfect() ? null : SkinEffectTerm.flat(conductor, thicknessMetres,
+                (stripDerivativeOhmPerMetre + groundDerivativeOhmPerMetre) / PhysicalConstants.FREE_SPACE_IMPEDANCE_OHM);
     }
 
     private double[] staticAt(double relativePermittivity) {
@@ -87,8 +103,6 @@ public final class MicrostripLine extends LineModel {
         return staticAt(relativePermittivity);
     }
 
-    /** Relative step of the central difference in ε′ at the static table's nodes. */
-    static final double STATIC_TABLE_STEP = 1e-5;
     /** Nodes per unit of ln ε′ in the static table (a sweep spans a few hundredths of a unit). */
     static final int STATIC_TABLE_NODES_PER_UNIT_LOG = 512;
 
@@ -100,6 +114,7 @@ public final class MicrostripLine extends LineModel {
      */
     @Override
     public void prepareForSweep(double[] frequenciesHz, int count) {
+        super.prepareForSweep(frequenciesHz, count);
         if (constantStatic != null || count < 16) {
             return;
         }
@@ -116,97 +131,136 @@ public final class MicrostripLine extends LineModel {
         if (!(low > 1.0) || (existing != null && existing.covers(low) && existing.covers(high))) {
             return;
         }
-        staticTable = new HermiteTable((relativePermittivity, out) -> {
-            double[] here = staticAt(relativePermittivity);
-            double[] above = staticAt(relativePermittivity * (1 + STATIC_TABLE_STEP));
-            double[] below = staticAt(relativePermittivity * (1 - STATIC_TABLE_STEP));
-            double span = 2 * STATIC_TABLE_STEP * relativePermittivity;
-            out[0] = here[0];
-            out[1] = here[1];
-            out[2] = (above[0] - below[0]) / span;
-            out[3] = (above[1] - below[1]) / span;
-        }, low, high, STATIC_TABLE_NODES_PER_UNIT_LOG);
+        staticTable = new HermiteTable(this::staticWithSlopes, low, high, STATIC_TABLE_NODES_PER_UNIT_LOG);
     }
 
     /** Kirschning-Jansen ε_eff(f). */
     public double effectivePermittivity(double frequencyHz) {
-        double[] statics = staticImpedanceAndPermittivity(frequencyHz);
-        return MicrostripFormulas.dispersiveEffectivePermittivity(statics[1], widthMetres / heightMetres,
-                permittivity.real(frequencyHz), frequencyHz * heightMetres);
+        LineParameters p = new LineParameters();
+        evaluateWithSlopes(frequencyHz, p);
+        return p.effectivePermittivity;
     }
 
     /** Internal impedance of strip and ground per metre, Ω/m. */
     public Complex conductorImpedance(double frequencyHz) {
-        Complex surface = InternalImpedance.flatSurface(conductor, thicknessMetres, frequencyHz);
-        return surface.multiply((stripDerivativeOhmPerMetre + groundDerivativeOhmPerMetre)
-                / PhysicalConstants.FREE_SPACE_IMPEDANCE_OHM);
+        LineParameters p = new LineParameters();
+        p.setFrequency(frequencyHz);
+        beginPoint(p);
+        if (conductorTerm != null) {
+            conductorTerm.addTo(p);
+        }
+        return new Complex(p.impedanceRe, p.impedanceIm);
     }
 
     @Override
     public void evaluate(double frequencyHz, LineParameters out) {
-        double[] dielectricPart = new double[3];
-        double effective = dielectricPart(frequencyHz, dielectricPart);
-        Complex internal = conductorImpedance(frequencyHz);
-        double omega = 2 * Math.PI * frequencyHz;
-        out.set(internal.getReal(), dielectricPart[0] + internal.getImaginary() / omega, dielectricPart[2],
-                dielectricPart[1], effective);
+        // every part has a closed-form derivative, so one code path serves both
+        evaluateWithSlopes(frequencyHz, out);
     }
 
     /**
-     * The parameters and their ω-derivatives. The conductor part has a closed-form derivative (the surface
-     * impedance's, with the roughness factor's); the rest (Hammerstad-Jensen at ε′(f), Kirschning-Jansen
-     * dispersion, the filling factor) is a chain of closed forms in f and ε′(f) without one, so it alone is
-     * differentiated numerically, by the same central difference the default uses. That part is a few
-     * elementary functions, a fraction of the surface impedance's cost.
+     * The parameters and their ω-derivatives, all in closed form. Conductors: the strip's and ground's surface
+     * impedance with the roughness factor ({@link SkinEffectTerm}). The rest is a chain of closed forms in f and
+     * ε′(f), differentiated by the chain rule: with Z_s the Hammerstad-Jensen static impedance at ε′, ε_e the
+     * Kirschning-Jansen ε_eff(f), ff = (ε_e − 1)/(ε′ − 1) the filling factor and A = ωε″ + σ_d/ε0,
+     * <pre>L'_ext = Z_s·sqrt(ε_e)/c,  C' = sqrt(ε_e)/(Z_s·c),  G' = A·ff/(c·sqrt(ε_e)·Z_s)</pre>
+     * (G' = 2α_d/Z_s with the filling-factor α_d of the class comment, ε′·tan δ_eff = ε″ + σ_d/(ωε0)), so
+     * L'_ω = L'·(Z_s,ω/Z_s + ε_e,ω/(2ε_e)), C'_ω = C'·(ε_e,ω/(2ε_e) − Z_s,ω/Z_s) and
+     * G'_ω = (A_ω·ff + A·ff_ω)/(c·sqrt(ε_e)·Z_s) − G'·(ε_e,ω/(2ε_e) + Z_s,ω/Z_s).
      */
     @Override
-    public void evaluateWithSlopes(double frequencyHz, LineParameters out) {
-        double step = GROUP_VELOCITY_STEP * frequencyHz;
-        double[] here = new double[3];
-        double[] above = new double[3];
-        double[] below = new double[3];
-        double effective = dielectricPart(frequencyHz, here);
-        dielectricPart(frequencyHz + step, above);
-        dielectricPart(frequencyHz - step, below);
-        double span = 2 * Math.PI * 2 * step;
-        double weight = (stripDerivativeOhmPerMetre + groundDerivativeOhmPerMetre)
-                / PhysicalConstants.FREE_SPACE_IMPEDANCE_OHM;
-        Complex[] surface = InternalImpedance.flatSurfaceWithSlope(conductor, thicknessMetres, frequencyHz);
-        double omega = 2 * Math.PI * frequencyHz;
-        double internalRe = surface[0].getReal() * weight;
-        double internalIm = surface[0].getImaginary() * weight;
-        double internalReSlope = surface[1].getReal() * weight;
-        double internalImSlope = surface[1].getImaginary() * weight;
-        out.set(internalRe, here[0] + internalIm / omega, here[2], here[1], effective);
-        // d(X/ω)/dω = (X′·ω − X)/ω²
-        out.setSlopes(internalReSlope, (above[0] - below[0]) / span + (internalImSlope * omega - internalIm) / (omega * omega),
-                (above[2] - below[2]) / span, (above[1] - below[1]) / span);
+    public void evaluatePoint(LineParameters out) {
+        beginPoint(out);
+        if (conductorTerm != null) {
+            conductorTerm.addTo(out);
+        }
+        permittivity.evaluate(out);
+        double omega = out.omega;
+        double er = out.permittivityRe;
+        double erSlope = out.permittivityReSlope;
+        // Hammerstad-Jensen statics at ε′ and their derivatives in ε′
+        double staticImpedance;
+        double staticEffective;
+        double staticImpedanceEr;
+        double staticEffectiveEr;
+        if (constantStatic != null) {
+            staticImpedance = constantStatic[0];
+            staticEffective = constantStatic[1];
+            staticImpedanceEr = 0.0;
+            staticEffectiveEr = 0.0;
+        } else {
+            double[] f = out.lookup;
+            HermiteTable table = staticTable;
+            if (table != null && table.covers(er)) {
+                table.evaluate(er, f);
+            } else {
+                staticWithSlopes(er, f);
+            }
+            staticImpedance = f[0];
+            staticEffective = f[1];
+            staticImpedanceEr = f[2];
+            staticEffectiveEr = f[3];
+        }
+        double[] k = out.dispersion;
+        dispersion.evaluate(staticEffective, er, out.frequencyHz * heightMegametres, out.logFrequency + logHeightMegametres,
+                k);
+        double effective = k[0];
+        double effectiveSlope = k[1] * heightMegametres / (2 * Math.PI)
+                + (k[2] + k[3] * staticEffectiveEr) * erSlope;
+        // three divisions a point: 1/Z_s, 1/sqrt(ε_e) and 1/(ε′ − 1); the rest multiplies
+        double inverseImpedance = 1.0 / staticImpedance;
+        double rootEffective = Math.sqrt(effective);
+        double inverseRoot = 1.0 / rootEffective;
+        double impedanceSlopeRatio = staticImpedanceEr * erSlope * inverseImpedance;
+        double halfEffectiveSlopeRatio = 0.5 * effectiveSlope * inverseRoot * inverseRoot;
+        double inductance = staticImpedance * rootEffective * INVERSE_SPEED_OF_LIGHT;
+        double capacitance = rootEffective * inverseImpedance * INVERSE_SPEED_OF_LIGHT;
+        double filling;
+        double fillingSlope;
+        if (er - 1.0 > 1e-12) {
+            double inverseExcess = 1.0 / (er - 1.0);
+            filling = (effective - 1.0) * inverseExcess;
+            fillingSlope = (effectiveSlope - filling * erSlope) * inverseExcess;
+        } else {
+            filling = 1.0;
+            fillingSlope = 0.0;
+        }
+        double loss = omega * out.permittivityIm + conductivityOverVacuumPermittivity;
+        double lossSlope = out.permittivityIm + omega * out.permittivityImSlope;
+        double lossScale = INVERSE_SPEED_OF_LIGHT * inverseRoot * inverseImpedance;
+        double conductance = loss * filling * lossScale;
+        double internalIm = out.impedanceIm;
+        double inverseOmega = out.inverseOmega;
+        out.set(out.impedanceRe, inductance + internalIm * inverseOmega, conductance, capacitance, effective);
+        out.setSlopes(out.impedanceReSlope,
+                inductance * (impedanceSlopeRatio + halfEffectiveSlopeRatio)
+                        + (out.impedanceImSlope - internalIm * inverseOmega) * inverseOmega,
+                (lossSlope * filling + loss * fillingSlope) * lossScale
+                        - conductance * (halfEffectiveSlopeRatio + impedanceSlopeRatio),
+                capacitance * (halfEffectiveSlopeRatio - impedanceSlopeRatio));
     }
 
+    /** Relative step of the central difference in ε′ for the static values' slopes. */
+    static final double STATIC_SLOPE_STEP = 1e-5;
+
     /**
-     * Everything but the conductors at f: L'_ext, C' and G' from the quasi-static Z0, the dispersive ε_eff and
-     * the filling-factor dielectric loss.
+     * The Hammerstad-Jensen static values at ε′ and their slopes in ε′ (central difference: the closed forms'
+     * own derivative in εr would be long and they vary slowly, so a relative step of 1e-5 gives about 1e-10).
      *
-     * @param out receives {L'_ext (H/m), C' (F/m), G' (S/m)}
-     * @return ε_eff(f)
+     * @param out receives {Z0, ε_eff(0), dZ0/dε′, dε_eff(0)/dε′}
      */
-    private double dielectricPart(double frequencyHz, double[] out) {
-        double omega = 2 * Math.PI * frequencyHz;
-        double relativePermittivity = permittivity.real(frequencyHz);
-        double[] statics = staticImpedanceAndPermittivity(frequencyHz);
-        double z0 = statics[0];
-        double effective = MicrostripFormulas.dispersiveEffectivePermittivity(statics[1],
-                widthMetres / heightMetres, relativePermittivity, frequencyHz * heightMetres);
-        double rootEffective = Math.sqrt(effective);
-        double c = PhysicalConstants.SPEED_OF_LIGHT_METRES_PER_SECOND;
-        double fillingFactor = relativePermittivity - 1.0 > 1e-12
-                ? (effective - 1.0) / (relativePermittivity - 1.0) : 1.0;
-        double alphaDielectric = (omega / c) * relativePermittivity * fillingFactor
-                * permittivity.effectiveLossTangent(frequencyHz) / (2.0 * rootEffective);
-        out[0] = z0 * rootEffective / c;
-        out[1] = rootEffective / (z0 * c);
-        out[2] = 2.0 * alphaDielectric / z0;
-        return effective;
+    private void staticWithSlopes(double relativePermittivity, double[] out) {
+        double[] here = staticAt(relativePermittivity);
+        double upper = relativePermittivity * (1 + STATIC_SLOPE_STEP);
+        // one-sided at ε′ = 1: the formulas are not defined below it
+        double lower = Math.max(1.0, relativePermittivity * (1 - STATIC_SLOPE_STEP));
+        double[] above = staticAt(upper);
+        double[] below = staticAt(lower);
+        double span = upper - lower;
+        out[0] = here[0];
+        out[1] = here[1];
+        out[2] = (above[0] - below[0]) / span;
+        out[3] = (above[1] - below[1]) / span;
     }
 
     @Override

@@ -25,6 +25,7 @@ public final class ParallelPlateLine extends HomogeneousTemLine {
         this.widthMetres = widthMetres;
         this.separationMetres = separationMetres;
         this.thicknessMetres = thicknessMetres;
+        setConductorTerms(SkinEffectTerm.flat(conductor, thicknessMetres, 2.0 / widthMetres));
     }
 
     @Override
@@ -40,12 +41,6 @@ public final class ParallelPlateLine extends HomogeneousTemLine {
     @Override
     public double capacitanceFactor() {
         return widthMetres / separationMetres;
-    }
-
-    @Override
-    public Complex[] conductorImpedanceWithSlope(double frequencyHz) {
-        Complex[] plate = InternalImpedance.flatSurfaceWithSlope(conductor, thicknessMetres, frequencyHz);
-        return new Complex[] {plate[0].multiply(2.0 / widthMetres), plate[1].multiply(2.0 / widthMetres)};
     }
 
     @Override

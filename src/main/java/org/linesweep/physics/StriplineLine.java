@@ -44,6 +44,9 @@ public final class StriplineLine extends HomogeneousTemLine {
         this.groundDerivativeOhmPerMetre =
                 (StriplineFormulas.airImpedance(widthMetres, spacingMetres + 2 * dn, thicknessMetres)
                 - StriplineFormulas.airImpedance(widthMetres, spacingMetres - 2 * dn, thicknessMetres)) / (2 * dn);
+        double eta0 = PhysicalConstants.FREE_SPACE_IMPEDANCE_OHM;
+        setConductorTerms(SkinEffectTerm.flat(conductor, thicknessMetres / 2, stripDerivativeOhmPerMetre / eta0),
+                SkinEffectTerm.flat(conductor, thicknessMetres, groundDerivativeOhmPerMetre / eta0));
     }
 
     @Override
@@ -59,17 +62,6 @@ public final class StriplineLine extends HomogeneousTemLine {
     @Override
     public double capacitanceFactor() {
         return capacitanceFactor;
-    }
-
-    @Override
-    public Complex[] conductorImpedanceWithSlope(double frequencyHz) {
-        Complex[] strip = InternalImpedance.flatSurfaceWithSlope(conductor, thicknessMetres / 2, frequencyHz);
-        Complex[] ground = InternalImpedance.flatSurfaceWithSlope(conductor, thicknessMetres, frequencyHz);
-        double eta0 = PhysicalConstants.FREE_SPACE_IMPEDANCE_OHM;
-        double stripWeight = stripDerivativeOhmPerMetre / eta0;
-        double groundWeight = groundDerivativeOhmPerMetre / eta0;
-        return new Complex[] {strip[0].multiply(stripWeight).add(ground[0].multiply(groundWeight)),
-            strip[1].multiply(stripWeight).add(ground[1].multiply(groundWeight))};
     }
 
     @Override

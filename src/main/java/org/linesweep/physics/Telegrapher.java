@@ -42,9 +42,8 @@ public final class Telegrapher {
         double ywIm = c + omega * dc;
         double numRe = zwRe * yRe - zwIm * yIm + zRe * ywRe - zIm * ywIm;
         double numIm = zwRe * yIm + zwIm * yRe + zRe * ywIm + zIm * ywRe;
-        // (num)/(2γ): imaginary part of num·conj(γ)/(2|γ|²)
-        double imaginary = (numIm * alpha - numRe * beta) / (2 * (alpha * alpha + beta * beta));
-        return 1.0 / imaginary;
+        // (num)/(2γ): imaginary part of num·conj(γ)/(2|γ|²); v_g is its reciprocal
+        return 2 * (alpha * alpha + beta * beta) / (numIm * alpha - numRe * beta);
     }
 
     /**

@@ -30,6 +30,7 @@ public final class TwoWireLine extends HomogeneousTemLine {
         double x = spacingMetres / wireDiameterMetres;
         this.proximityFactor = x / Math.sqrt((x - 1) * (x + 1));
         this.capacitanceFactor = Math.PI / acosh(x);
+        setConductorTerms(SkinEffectTerm.roundWire(conductor, wireRadiusMetres, proximityFactor, 2.0));
     }
 
     @Override
@@ -50,33 +51,6 @@ public final class TwoWireLine extends HomogeneousTemLine {
     /** X/sqrt(X² − 1) with X = D/2a. */
     public double proximityFactor() {
         return proximityFactor;
-    }
-
-    @Override
-    public Complex[] conductorImpedanceWithSlope(double frequencyHz) {
-        Complex[] wire = wireImpedanceWithSlope(conductor, wireRadiusMetres, proximityFactor, frequencyHz);
-        return new Complex[] {wire[0].multiply(2.0), wire[1].multiply(2.0)};
-    }
-
-    /**
-     * One wire's internal impedance with the blended proximity factor, and its derivative with respect to ω:
-     * G(x) = F(x)·[1 + s(x)(P − 1)] with s = 1 − 1/Re F, so G′ = F′·P_eff + F·(P − 1)·Re F′/(Re F)² while s &gt; 0.
-     */
-    static Complex[] wireImpedanceWithSlope(Conductor conductor, double radiusMetres, double proximityFactor,
-            double frequencyHz) {
-        if (conductor.isPerfect()) {
-            return new Complex[] {Complex.ZERO, Complex.ZERO};
-        }
-        double dcResistance = 1.0 / (conductor.conductivitySiemensPerMetre() * Math.PI * radiusMetres * radiusMetres);
-        double x = radiusMetres / conductor.skinDepthMetres(frequencyHz);
-        Complex[] ratio = InternalImpedance.roundWireRatioWithSlope(x);
-        double blended = InternalImpedance.blendedProximity(ratio[0], proximityFactor);
-        double realRatio = ratio[0].getReal();
-        double blendSlope = realRatio > 1.0
-                ? (proximityFactor - 1.0) * ratio[1].getReal() / (realRatio * realRatio) : 0.0;
-        Complex[] withProximity = {ratio[0].multiply(blended),
-            ratio[1].multiply(blended).add(ratio[0].multiply(blendSlope))};
-        return InternalImpedance.scaleWithSlope(conductor, dcResistance, withProximity, x, frequencyHz);
     }
 
     /** R_ac/R_dc of one wire including the blended proximity factor. */

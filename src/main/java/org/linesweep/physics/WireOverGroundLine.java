@@ -34,6 +34,8 @@ public final class WireOverGroundLine extends HomogeneousTemLine {
         this.proximityFactor = x / Math.sqrt((x - 1) * (x + 1));
         this.capacitanceFactor = 2 * Math.PI / acosh(x);
         this.sourceHeightMetres = Math.sqrt((heightMetres - wireRadiusMetres) * (heightMetres + wireRadiusMetres));
+        setConductorTerms(SkinEffectTerm.roundWire(conductor, wireRadiusMetres, proximityFactor, 1.0),
+                SkinEffectTerm.flat(conductor, Double.POSITIVE_INFINITY, 1.0 / (2 * Math.PI * sourceHeightMetres)));
     }
 
     @Override
@@ -49,14 +51,6 @@ public final class WireOverGroundLine extends HomogeneousTemLine {
     @Override
     public double capacitanceFactor() {
         return capacitanceFactor;
-    }
-
-    @Override
-    public Complex[] conductorImpedanceWithSlope(double frequencyHz) {
-        Complex[] wire = TwoWireLine.wireImpedanceWithSlope(conductor, wireRadiusMetres, proximityFactor, frequencyHz);
-        Complex[] ground = InternalImpedance.flatSurfaceWithSlope(conductor, Double.POSITIVE_INFINITY, frequencyHz);
-        double share = 1.0 / (2 * Math.PI * sourceHeightMetres);
-        return new Complex[] {wire[0].add(ground[0].multiply(share)), wire[1].add(ground[1].multiply(share))};
     }
 
     @Override

@@ -1,6 +1,7 @@
 package org.linesweep.sweep;
 
 import org.linesweep.physics.CoupledPair;
+import org.linesweep.physics.FrequencyColumns;
 import org.linesweep.physics.LineModel;
 import org.linesweep.physics.PairModes;
 import org.linesweep.physics.LineParameters;
@@ -14,6 +15,8 @@ public final class SweepEngine {
 
     private final LineParameters scratch = new LineParameters();
     private final double[] solution = new double[Telegrapher.SIZE];
+    /** The last grid swept and what the models derive from it: a drag re-sweeps the same grid. */
+    private final FrequencyColumns grid = new FrequencyColumns();
 
     /** Computes a sweep into a new result. */
     public SweepResult run(LineModel model, double[] frequenciesHz, double lengthMetres) {
@@ -61,38 +64,59 @@ public final class SweepEngine {
         reuse.prepare(count, lengthMetres);
         reuse.preparePair(false);
         model.prepareForSweep(frequenciesHz, count);
+        if (!grid.holds(frequenciesHz, count)) {
+            grid.fill(frequenciesHz, count);
+        }
+        FrequencyColumns columns = grid;
+        // the columns in locals: the model's call in the loop could, as far as the compiler knows, change the
+        // result's fields, so it would reload each of them (and its bounds) at every point
+        LineParameters p = scratch;
+        double[] out = solution;
+        double[] frequency = reuse.frequencyHz;
+        double[] resistance = reuse.resistanceOhmPerMetre;
+        double[] inductance = reuse.inductanceHenryPerMetre;
+        double[] conductance = reuse.conductanceSiemensPerMetre;
+        double[] capacitance = reuse.capacitanceFaradPerMetre;
+        double[] z0Real = reuse.z0RealOhm;
+        double[] z0Imaginary = reuse.z0ImaginaryOhm;
+        double[] alphaColumn = reuse.alphaNepersPerMetre;
+        double[] conductorAlpha = reuse.conductorAlphaNepersPerMetre;
+        double[] betaColumn = reuse.betaRadiansPerMetre;
+        double[] groupVelocityColumn = reuse.groupVelocityMetresPerSecond;
+        double[] permittivity = reuse.effectivePermittivity;
+        double[] skinDepth = reuse.skinDepthMetres;
         for (int i = 0; i < count; i++) {
             double f = frequenciesHz[i];
-            model.evaluateWithSlopes(f, scratch);
-            double r = scratch.resistanceOhmPerMetre();
-            double g = scratch.conductanceSiemensPerMetre();
+            p.setFrequency(columns, i);
+            model.evaluatePoint(p);
+            double r = p.resistanceOhmPerMetre();
+            double l = p.inductanceHenryPerMetre();
+            double g = p.conductanceSiemensPerMetre();
+            double c = p.capacitanceFaradPerMetre();
             double omega = 2 * Math.PI * f;
-            Telegrapher.solve(r, scratch.inductanceHenryPerMetre(), g, scratch.capacitanceFaradPerMetre(), omega,
-                    solution);
-            double groupVelocity = Telegrapher.groupVelocity(r, scratch.inductanceHenryPerMetre(), g,
-                    scratch.capacitanceFaradPerMetre(), scratch.resistanceSlope(), scratch.inductanceSlope(),
-                    scratch.conductanceSlope(), scratch.capacitanceSlope(), omega, solution[Telegrapher.ALPHA],
-                    solution[Telegrapher.BETA]);
-            double alpha = solution[Telegrapher.ALPHA];
-            double z0Re = solution[Telegrapher.Z0_RE];
-            double z0Im = solution[Telegrapher.Z0_IM];
-            double z0Squared = z0Re * z0Re + z0Im * z0Im;
-            double conductorTerm = r;
-            double dielectricTerm = g * z0Squared;
-            double total = conductorTerm + dielectricTerm;
-            reuse.frequencyHz[i] = f;
-            reuse.resistanceOhmPerMetre[i] = r;
-            reuse.inductanceHenryPerMetre[i] = scratch.inductanceHenryPerMetre();
-            reuse.conductanceSiemensPerMetre[i] = g;
-            reuse.capacitanceFaradPerMetre[i] = scratch.capacitanceFaradPerMetre();
-            reuse.z0RealOhm[i] = z0Re;
-            reuse.z0ImaginaryOhm[i] = z0Im;
-            reuse.alphaNepersPerMetre[i] = alpha;
-            reuse.conductorAlphaNepersPerMetre[i] = total > 0 ? alpha * conductorTerm / total : 0.0;
-            reuse.betaRadiansPerMetre[i] = solution[Telegrapher.BETA];
-            reuse.groupVelocityMetresPerSecond[i] = groupVelocity;
-            reuse.effectivePermittivity[i] = scratch.effectivePermittivity();
-            reuse.skinDepthMetres[i] = model.skinDepthMetres(f);
+            Telegrapher.solve(r, l, g, c, omega, out);
+            double alpha = out[Telegrapher.ALPHA];
+            double beta = out[Telegrapher.BETA];
+            double z0Re = out[Telegrapher.Z0_RE];
+            double z0Im = out[Telegrapher.Z0_IM];
+            double groupVelocity = Telegrapher.groupVelocity(r, l, g, c, p.resistanceSlope(), p.inductanceSlope(),
+                    p.conductanceSlope(), p.capacitanceSlope(), omega, alpha, beta);
+            // α ≈ (R' + G'·|Z0|²)/(2|Z0|) on a low-loss line, so the conductors' share of α is R'/(R' + G'·|Z0|²)
+            double dielectricTerm = g * (z0Re * z0Re + z0Im * z0Im);
+            double total = r + dielectricTerm;
+            frequency[i] = f;
+            resistance[i] = r;
+            inductance[i] = l;
+            conductance[i] = g;
+            capacitance[i] = c;
+            z0Real[i] = z0Re;
+            z0Imaginary[i] = z0Im;
+            alphaColumn[i] = alpha;
+            conductorAlpha[i] = total > 0 ? alpha * r / total : 0.0;
+            betaColumn[i] = beta;
+            groupVelocityColumn[i] = groupVelocity;
+            permittivity[i] = p.effectivePermittivity();
+            skinDepth[i] = p.skinDepthMetres();
         }
         return reuse;
     }

@@ -9,9 +9,9 @@ import org.linesweep.sweep.SweepEngine;
 import org.linesweep.sweep.SweepResult;
 
 /**
- * A microstrip on a wideband (dispersive) laminate swept with its tabulated static values against the same
- * line evaluated exactly point by point: R', L', G', C' and ε_eff within 1e-10, the group velocity (which
- * uses the slopes) within 1e-9.
+ * A microstrip on a wideband (dispersive) laminate swept with its tabulated static values and permittivity against the same
+ * line evaluated exactly point by point: R', L', G', C' and ε_eff within 3e-10 (the permittivity table's
+ * accuracy, see {@code DielectricTableTest}), the group velocity (which uses the slopes) within 1e-9.
  */
 class MicrostripTableTest {
 
@@ -36,7 +36,7 @@ class MicrostripTableTest {
             worstGroup = Math.max(worstGroup, Tolerances.relativeError(sweep.groupVelocityMetresPerSecond(i),
                     p.groupVelocityMetresPerSecond()));
         }
-        assertTrue(worst < 1e-10, "parameters " + worst);
+        assertTrue(worst < 3e-10, "parameters " + worst);
         assertTrue(worstGroup < 1e-9, "group velocity " + worstGroup);
     }
 }
