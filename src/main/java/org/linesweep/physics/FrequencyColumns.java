@@ -47,6 +47,11 @@ public final class FrequencyColumns {
         this.count = count;
     }
 
+    /** ω of the i-th frequency, rad/s. */
+    public double omega(int i) {
+        return omega[i];
+    }
+
     /** Number of frequencies held. */
     public int size() {
         return count;

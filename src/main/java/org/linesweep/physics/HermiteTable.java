@@ -34,36 +34,86 @@ final class HermiteTable {
      */
     private final double[] cells;
 
+    /** Several complex functions of the same x evaluated together: writes {Re F, Im F, Re F′, Im F′} for each. */
+    interface SeveralSource {
+        void evaluate(double x, double[] out);
+    }
+
     /**
      * Builds the table over [xMin, xMax] (the ends are nodes).
      *
      * @param nodesPerUnitLog nodes per unit of ln x
      */
     HermiteTable(Source source, double xMin, double xMax, int nodesPerUnitLog) {
-        double span = Math.log(xMax / xMin);
-        int intervals = Math.max(1, (int) Math.ceil(span * nodesPerUnitLog));
-        this.firstU = Math.log(xMin);
-        this.lastU = Math.log(xMax);
-        this.step = span / intervals;
-        this.inverseStep = intervals / span;
-        this.firstX = xMin;
-        this.lastX = xMax;
-        this.lastCell = intervals - 1;
-        int nodes = intervals + 1;
-        double[] valueRe = new double[nodes];
-        double[] valueIm = new double[nodes];
-        double[] slopeRe = new double[nodes];
-        double[] slopeIm = new double[nodes];
-        double[] out = new double[4];
-        for (int i = 0; i < nodes; i++) {
-            double x = i == intervals ? xMax : Math.exp(firstU + i * step);
-            source.evaluate(x, out);
-            valueRe[i] = out[0];
-            valueIm[i] = out[1];
-            // dG/du = x·F′(x), times the step: the slope per unit of t
-            slopeRe[i] = x * out[2] * step;
-            slopeIm[i] = x * out[3] * step;
+        this(new Nodes(xMin, xMax, nodesPerUnitLog, 1, source::evaluate), 0);
+    }
+
+    /**
+     * Builds {@code count} tables over the same nodes from one evaluation per node: for functions that share most
+     * of their work.
+     */
+    static HermiteTable[] several(int count, SeveralSource source, double xMin, double xMax, int nodesPerUnitLog) {
+        Nodes nodes = new Nodes(xMin, xMax, nodesPerUnitLog, count, source);
+        HermiteTable[] tables = new HermiteTable[count];
+        for (int j = 0; j < count; j++) {
+            tables[j] = new HermiteTable(nodes, j);
         }
+        return tables;
+    }
+
+    /** The functions' values and slopes per unit of t at the nodes of a uniform grid in ln x. */
+    private static final class Nodes {
+        final double xMin;
+        final double xMax;
+        final double firstU;
+        final double step;
+        final int intervals;
+        /** [function][node]: value Re, value Im, slope Re, slope Im. */
+        final double[][] valueRe;
+        final double[][] valueIm;
+        final double[][] slopeRe;
+        final double[][] slopeIm;
+
+        Nodes(double xMin, double xMax, int nodesPerUnitLog, int functions, SeveralSource source) {
+            double span = Math.log(xMax / xMin);
+            this.xMin = xMin;
+            this.xMax = xMax;
+            this.intervals = Math.max(1, (int) Math.ceil(span * nodesPerUnitLog));
+            this.firstU = Math.log(xMin);
+            this.step = span / intervals;
+            int nodes = intervals + 1;
+            valueRe = new double[functions][nodes];
+            valueIm = new double[functions][nodes];
+            slopeRe = new double[functions][nodes];
+            slopeIm = new double[functions][nodes];
+            double[] out = new double[4 * functions];
+            for (int i = 0; i < nodes; i++) {
+                double x = i == intervals ? xMax : Math.exp(firstU + i * step);
+                source.evaluate(x, out);
+                for (int j = 0; j < functions; j++) {
+                    valueRe[j][i] = out[4 * j];
+                    valueIm[j][i] = out[4 * j + 1];
+                    // dG/du = x·F′(x), times the step: the slope per unit of t
+                    slopeRe[j][i] = x * out[4 * j + 2] * step;
+                    slopeIm[j][i] = x * out[4 * j + 3] * step;
+                }
+            }
+        }
+    }
+
+    private HermiteTable(Nodes nodes, int function) {
+        int intervals = nodes.intervals;
+        this.firstU = nodes.firstU;
+        this.lastU = Math.log(nodes.xMax);
+        this.step = nodes.step;
+        this.inverseStep = 1.0 / nodes.step;
+        this.firstX = nodes.xMin;
+        this.lastX = nodes.xMax;
+        this.lastCell = intervals - 1;
+        double[] valueRe = nodes.valueRe[function];
+        double[] valueIm = nodes.valueIm[function];
+        double[] slopeRe = nodes.slopeRe[function];
+        double[] slopeIm = nodes.slopeIm[function];
         cells = new double[8 * intervals];
         for (int k = 0; k < intervals; k++) {
             cubic(valueRe[k], slopeRe[k], valueRe[k + 1], slopeRe[k + 1], cells, 8 * k);

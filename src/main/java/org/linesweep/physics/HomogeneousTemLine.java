@@ -18,9 +18,22 @@ public abstract class HomogeneousTemLine extends LineModel {
         super(conductor, dielectric);
     }
 
-    /** Sets the conductors' shares of the internal impedance, from the subclass's constructor; none if perfect. */
+    /** μ0μr/F, ε0F and σ_d·F: what the geometry contributes to every point. */
+    private double externalInductance;
+    private double vacuumCapacitance;
+    private double bulkConductance;
+
+    /**
+     * Completes construction, from the end of the subclass's constructor (once F is known): sets the
+     * conductors' shares of the internal impedance (none if perfect) and the geometry's constants.
+     */
     final void setConductorTerms(SkinEffectTerm... terms) {
         this.conductorTerms = conductor.isPerfect() ? new SkinEffectTerm[0] : terms.clone();
+        double factor = capacitanceFactor();
+        this.externalInductance = PhysicalConstants.VACUUM_PERMEABILITY_HENRY_PER_METRE
+                * dielectric.relativePermeability() / factor;
+        this.vacuumCapacitance = PhysicalConstants.VACUUM_PERMITTIVITY_FARAD_PER_METRE * factor;
+        this.bulkConductance = permittivity.conductivity() * factor;
     }
 
     /** Prepares the dielectric's and the conductors' tables for the sweep (see {@link LineModel#prepareForSweep}). */
@@ -71,16 +84,13 @@ public abstract class HomogeneousTemLine extends LineModel {
         permittivity.evaluate(out);
         double omega = out.omega;
         double inverseOmega = out.inverseOmega;
-        double factor = capacitanceFactor();
-        double eps0Factor = PhysicalConstants.VACUUM_PERMITTIVITY_FARAD_PER_METRE * factor;
+        double eps0Factor = vacuumCapacitance;
         double realPermittivity = out.permittivityRe;
         double imaginaryPermittivity = out.permittivityIm;
-        double externalInductance = PhysicalConstants.VACUUM_PERMEABILITY_HENRY_PER_METRE
-                * dielectric.relativePermeability() / factor;
         double internalIm = out.impedanceIm;
         out.set(out.impedanceRe,
                 externalInductance + internalIm * inverseOmega,
-                omega * eps0Factor * imaginaryPermittivity + permittivity.conductivity() * factor,
+                omega * eps0Factor * imaginaryPermittivity + bulkConductance,
                 eps0Factor * realPermittivity,
                 realPermittivity);
         out.setSlopes(out.impedanceReSlope,

@@ -49,6 +49,8 @@ public final class LineParameters {
     final double[] lookup = new double[4];
     /** Receives microstrip's dispersion: {ε_eff, ∂/∂fn, ∂/∂εr, ∂/∂ε_eff(0)}. */
     final double[] dispersion = new double[4];
+    /** Receives microstrip's substrate side: {L'_ext, C', G', ε_eff, and their ω-derivatives}. */
+    final double[] substrate = new double[8];
 
     public double resistanceOhmPerMetre() {
         return resistanceOhmPerMetre;

@@ -38,6 +38,8 @@ public final class MicrostripLine extends LineModel {
      * tabulated over a sweep's range of ε′(f) when the dielectric is dispersive; null otherwise.
      */
     private volatile HermiteTable staticTable;
+    /** {L'_ext + jC', G' + jε_e} against f over a sweep's range (see {@link #prepareForSweep}); null until then. */
+    private volatile HermiteTable[] substrateTables;
     private final MicrostripFormulas.Dispersion dispersion;
     private static final double INVERSE_SPEED_OF_LIGHT = 1.0 / PhysicalConstants.SPEED_OF_LIGHT_METRES_PER_SECOND;
     /** σ_d/ε0 of the substrate, 1/s. */
@@ -106,32 +108,71 @@ public final class MicrostripLine extends LineModel {
     /** Nodes per unit of ln ε′ in the static table (a sweep spans a few hundredths of a unit). */
     static final int STATIC_TABLE_NODES_PER_UNIT_LOG = 512;
 
+    /** Nodes per unit of ln f in the substrate tables. */
+    static final int SUBSTRATE_TABLE_NODES_PER_UNIT_LOG = 64;
+    /** The substrate tables are built only for sweeps with at least this many points per node. */
+    static final double POINTS_PER_SUBSTRATE_NODE = 1.5;
+
     /**
-     * With a wideband dielectric the Hammerstad-Jensen static values change with f only through ε′(f), which a
-     * sweep moves over a narrow range (a few per cent): tabulate them over that range, padded so the
-     * slopes' neighbouring evaluations stay inside, from a handful of exact evaluations (slopes in ε′ by
-     * central difference at the nodes). Each point then reads the table instead of three exact evaluations.
+     * Two tables over the sweep, when it is dense enough that they cost less than evaluating each point:
+     * <ul>
+     * <li>With a wideband dielectric the Hammerstad-Jensen static values change with f only through ε′(f), which
+     * a sweep moves over a narrow range (a few per cent, ε′ falling with f): they are tabulated over that range,
+     * padded, from a few dozen exact evaluations (slopes in ε′ by central difference at the nodes).</li>
+     * <li>Everything but the conductors (L'_ext, C', G', ε_e with their slopes: Hammerstad-Jensen at ε′(f),
+     * Kirschning-Jansen's dispersion, the filling factor) is a smooth function of ln f, so it is tabulated
+     * against ln f at {@link #SUBSTRATE_TABLE_NODES_PER_UNIT_LOG} nodes per unit (two lookups a point instead of
+     * five exponentials, a logarithm and a dozen multiplications), when the sweep has at least
+     * {@link #POINTS_PER_SUBSTRATE_NODE} points per node. Held within 3e-10 of point-by-point evaluation
+     * (tested).</li>
+     * </ul>
      */
     @Override
     public void prepareForSweep(double[] frequenciesHz, int count) {
         super.prepareForSweep(frequenciesHz, count);
-        if (constantStatic != null || count < 16) {
+        if (count < 16) {
             return;
         }
-        double low = Double.POSITIVE_INFINITY;
-        double high = 0.0;
+        double lowHz = Double.POSITIVE_INFINITY;
+        double highHz = 0.0;
         for (int i = 0; i < count; i++) {
-            double value = permittivity.real(frequenciesHz[i]);
-            low = Math.min(low, value);
-            high = Math.max(high, value);
+            lowHz = Math.min(lowHz, frequenciesHz[i]);
+            highHz = Math.max(highHz, frequenciesHz[i]);
         }
-        low *= 1 - 1e-3;
-        high *= 1 + 1e-3;
-        HermiteTable existing = staticTable;
-        if (!(low > 1.0) || (existing != null && existing.covers(low) && existing.covers(high))) {
+        if (!(highHz > lowHz) || !(lowHz > 0)) {
             return;
         }
-        staticTable = new HermiteTable(this::staticWithSlopes, low, high, STATIC_TABLE_NODES_PER_UNIT_LOG);
+        if (constantStatic == null) {
+            // the wideband model's ε′ falls monotonically with f: its range is set by the ends
+            double low = permittivity.real(highHz) * (1 - 1e-3);
+            double high = permittivity.real(lowHz) * (1 + 1e-3);
+            HermiteTable existing = staticTable;
+            if (low > 1.0 && !(existing != null && existing.covers(low) && existing.covers(high))) {
+                staticTable = new HermiteTable(this::staticWithSlopes, low, high, STATIC_TABLE_NODES_PER_UNIT_LOG);
+            }
+        }
+        HermiteTable[] existing = substrateTables;
+        if (existing != null && existing[0].covers(lowHz) && existing[0].covers(highHz)) {
+            return;
+        }
+        double nodes = Math.log(highHz / lowHz) * SUBSTRATE_TABLE_NODES_PER_UNIT_LOG + 1;
+        if (nodes * POINTS_PER_SUBSTRATE_NODE <= count) {
+            LineParameters node = new LineParameters();
+            double[] values = new double[8];
+            double dOmegaDf = 2 * Math.PI;
+            substrateTables = HermiteTable.several(2, (frequencyHz, out) -> {
+                node.setFrequency(frequencyHz);
+                substrate(node, values);
+                out[0] = values[0];
+                out[1] = values[1];
+                out[2] = values[4] * dOmegaDf;
+                out[3] = values[5] * dOmegaDf;
+                out[4] = values[2];
+                out[5] = values[3];
+                out[6] = values[6] * dOmegaDf;
+                out[7] = values[7] * dOmegaDf;
+            }, lowHz, highHz, SUBSTRATE_TABLE_NODES_PER_UNIT_LOG);
+        }
     }
 
     /** Kirschning-Jansen ε_eff(f). */
@@ -174,10 +215,43 @@ public final class MicrostripLine extends LineModel {
         if (conductorTerm != null) {
             conductorTerm.addTo(out);
         }
-        permittivity.evaluate(out);
-        double omega = out.omega;
-        double er = out.permittivityRe;
-        double erSlope = out.permittivityReSlope;
+        double[] k = out.substrate;
+        HermiteTable[] tables = substrateTables;
+        if (tables != null && tables[0].coversLog(out.logFrequency)) {
+            // {L'_ext + jC'} and {G' + jε_e} against ln f: d/dω = (d/d ln f)/ω
+            double[] f = out.lookup;
+            double inverseOmega = out.inverseOmega;
+            tables[0].evaluateLog(out.logFrequency, f);
+            k[0] = f[0];
+            k[1] = f[1];
+            k[4] = f[2] * inverseOmega;
+            k[5] = f[3] * inverseOmega;
+            tables[1].evaluateLog(out.logFrequency, f);
+            k[2] = f[0];
+            k[3] = f[1];
+            k[6] = f[2] * inverseOmega;
+            k[7] = f[3] * inverseOmega;
+        } else {
+            substrate(out, k);
+        }
+        double internalIm = out.impedanceIm;
+        double inverseOmega = out.inverseOmega;
+        out.set(out.impedanceRe, k[0] + internalIm * inverseOmega, k[2], k[1], k[3]);
+        out.setSlopes(out.impedanceReSlope, k[4] + (out.impedanceImSlope - internalIm * inverseOmega) * inverseOmega,
+                k[6], k[5]);
+    }
+
+    /**
+     * Everything but the conductors at the point {@code p} describes, with ω-derivatives (see
+     * {@link #evaluatePoint} for the forms).
+     *
+     * @param into receives {L'_ext, C', G', ε_e, dL'_ext/dω, dC'/dω, dG'/dω, dε_e/dω}
+     */
+    private void substrate(LineParameters p, double[] into) {
+        permittivity.evaluate(p);
+        double omega = p.omega;
+        double er = p.permittivityRe;
+        double erSlope = p.permittivityReSlope;
         // Hammerstad-Jensen statics at ε′ and their derivatives in ε′
         double staticImpedance;
         double staticEffective;
@@ -189,7 +263,7 @@ public final class MicrostripLine extends LineModel {
             staticImpedanceEr = 0.0;
             staticEffectiveEr = 0.0;
         } else {
-            double[] f = out.lookup;
+            double[] f = p.lookup;
             HermiteTable table = staticTable;
             if (table != null && table.covers(er)) {
                 table.evaluate(er, f);
@@ -201,13 +275,13 @@ public final class MicrostripLine extends LineModel {
             staticImpedanceEr = f[2];
             staticEffectiveEr = f[3];
         }
-        double[] k = out.dispersion;
-        dispersion.evaluate(staticEffective, er, out.frequencyHz * heightMegametres, out.logFrequency + logHeightMegametres,
+        double[] k = p.dispersion;
+        dispersion.evaluate(staticEffective, er, p.frequencyHz * heightMegametres, p.logFrequency + logHeightMegametres,
                 k);
         double effective = k[0];
         double effectiveSlope = k[1] * heightMegametres / (2 * Math.PI)
                 + (k[2] + k[3] * staticEffectiveEr) * erSlope;
-        // three divisions a point: 1/Z_s, 1/sqrt(ε_e) and 1/(ε′ − 1); the rest multiplies
+        // three divisions: 1/Z_s, 1/sqrt(ε_e) and 1/(ε′ − 1); the rest multiplies
         double inverseImpedance = 1.0 / staticImpedance;
         double rootEffective = Math.sqrt(effective);
         double inverseRoot = 1.0 / rootEffective;
@@ -225,19 +299,19 @@ public final class MicrostripLine extends LineModel {
             filling = 1.0;
             fillingSlope = 0.0;
         }
-        double loss = omega * out.permittivityIm + conductivityOverVacuumPermittivity;
-        double lossSlope = out.permittivityIm + omega * out.permittivityImSlope;
+        double loss = omega * p.permittivityIm + conductivityOverVacuumPermittivity;
+        double lossSlope = p.permittivityIm + omega * p.permittivityImSlope;
         double lossScale = INVERSE_SPEED_OF_LIGHT * inverseRoot * inverseImpedance;
         double conductance = loss * filling * lossScale;
-        double internalIm = out.impedanceIm;
-        double inverseOmega = out.inverseOmega;
-        out.set(out.impedanceRe, inductance + internalIm * inverseOmega, conductance, capacitance, effective);
-        out.setSlopes(out.impedanceReSlope,
-                inductance * (impedanceSlopeRatio + halfEffectiveSlopeRatio)
-                        + (out.impedanceImSlope - internalIm * inverseOmega) * inverseOmega,
-                (lossSlope * filling + loss * fillingSlope) * lossScale
-                        - conductance * (halfEffectiveSlopeRatio + impedanceSlopeRatio),
-                capacitance * (halfEffectiveSlopeRatio - impedanceSlopeRatio));
+        into[0] = inductance;
+        into[1] = capacitance;
+        into[2] = conductance;
+        into[3] = effective;
+        into[4] = inductance * (impedanceSlopeRatio + halfEffectiveSlopeRatio);
+        into[5] = capacitance * (halfEffectiveSlopeRatio - impedanceSlopeRatio);
+        into[6] = (lossSlope * filling + loss * fillingSlope) * lossScale
+                - conductance * (halfEffectiveSlopeRatio + impedanceSlopeRatio);
+        into[7] = effectiveSlope;
     }
 
     /** Relative step of the central difference in ε′ for the static values' slopes. */

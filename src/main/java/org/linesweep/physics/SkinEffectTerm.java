@@ -132,37 +132,7 @@ final class SkinEffectTerm {
      */
     void addTo(LineParameters p) {
         double[] f = p.lookup;
-        double u = logSizeAtOneHertz + 0.5 * p.logFrequency;
-        switch (shape) {
-            case ROUND_WIRE -> {
-                HermiteTable table = InternalImpedance.RoundWireTable.TABLE;
-                if (table.coversLog(u)) {
-                    table.evaluateLog(u, f);
-                } else {
-                    exact(InternalImpedance.exactRoundWireRatioWithSlope(Math.exp(u)), Math.exp(u), f);
-                }
-                if (proximityFactor != 1.0) {
-                    blendProximity(f);
-                }
-            }
-            case FLAT -> {
-                HermiteTable table = InternalImpedance.FlatTable.TABLE;
-                if (table.coversLog(u)) {
-                    table.evaluateLog(u, f);
-                } else {
-                    exact(InternalImpedance.exactFlatRatioWithSlope(Math.exp(u)), Math.exp(u), f);
-                }
-            }
-            case THICK_FLAT -> {
-                double x = sizeAtOneHertz * p.sqrtFrequency;
-                f[0] = x;
-                f[1] = x;
-                f[2] = x;
-                f[3] = x;
-            }
-            case TUBE -> tube(u, f);
-            default -> throw new IllegalStateException(shape.toString());
-        }
+        shapeAt(p, f);
         double k = p.roughness;
         double kSlope = p.roughnessSlope;
         double half = 0.5 * p.inverseOmega;
@@ -170,6 +140,61 @@ final class SkinEffectTerm {
         p.impedanceIm += scale * k * f[1];
         p.impedanceReSlope += scale * (kSlope * f[0] + k * f[2] * half);
         p.impedanceImSlope += scale * (kSlope * f[1] + k * f[3] * half);
+    }
+
+    /**
+     * Writes F and dF/d ln x at the point into {@code f}. Each shape's path is its own small method, the exact
+     * forms outside the tables too, so that the compiler inlines the common path into the sweep's loop.
+     */
+    private void shapeAt(LineParameters p, double[] f) {
+        double u = logSizeAtOneHertz + 0.5 * p.logFrequency;
+        switch (shape) {
+            case ROUND_WIRE -> roundWire(u, f);
+            case FLAT -> flat(u, f);
+            case THICK_FLAT -> thickFlat(p, f);
+            case TUBE -> tube(u, f);
+            default -> throw new IllegalStateException(shape.toString());
+        }
+    }
+
+    private void roundWire(double u, double[] f) {
+        HermiteTable table = InternalImpedance.RoundWireTable.TABLE;
+        if (table.coversLog(u)) {
+            table.evaluateLog(u, f);
+        } else {
+            exactRoundWire(u, f);
+        }
+        if (proximityFactor != 1.0) {
+            blendProximity(f);
+        }
+    }
+
+    private static void exactRoundWire(double u, double[] f) {
+        double x = Math.exp(u);
+        exact(InternalImpedance.exactRoundWireRatioWithSlope(x), x, f);
+    }
+
+    private static void flat(double u, double[] f) {
+        HermiteTable table = InternalImpedance.FlatTable.TABLE;
+        if (table.coversLog(u)) {
+            table.evaluateLog(u, f);
+        } else {
+            exactFlat(u, f);
+        }
+    }
+
+    private static void exactFlat(double u, double[] f) {
+        double x = Math.exp(u);
+        exact(InternalImpedance.exactFlatRatioWithSlope(x), x, f);
+    }
+
+    /** (1 + j)·x with x = 1/δ (unit size), whose slope in ln x is itself. */
+    private void thickFlat(LineParameters p, double[] f) {
+        double x = sizeAtOneHertz * p.sqrtFrequency;
+        f[0] = x;
+        f[1] = x;
+        f[2] = x;
+        f[3] = x;
     }
 
     /** The tube's T and dT/d ln x: the thick-wall table, this tube's sweep table, or the exact form. */
@@ -187,6 +212,10 @@ final class SkinEffectTerm {
             table.evaluateLog(u, f);
             return;
         }
+        exactTube(u, f);
+    }
+
+    private void exactTube(double u, double[] f) {
         double x = Math.exp(u);
         exact(InternalImpedance.tubeRatioWithSlope(x, kappa), x, f);
     }

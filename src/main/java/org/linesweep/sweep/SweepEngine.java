@@ -93,7 +93,7 @@ public final class SweepEngine {
             double l = p.inductanceHenryPerMetre();
             double g = p.conductanceSiemensPerMetre();
             double c = p.capacitanceFaradPerMetre();
-            double omega = 2 * Math.PI * f;
+            double omega = columns.omega(i);
             Telegrapher.solve(r, l, g, c, omega, out);
             double alpha = out[Telegrapher.ALPHA];
             double beta = out[Telegrapher.BETA];
