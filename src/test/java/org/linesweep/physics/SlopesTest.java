@@ -103,4 +103,39 @@ class SlopesTest {
     net.jqwik.api.Arbitrary<Double> frequencies() {
         return new LineInvariantsTest().frequencies();
     }
+
+    /**
+     * Kirschning-Jansen's ε_eff(f): the closed-form partial derivatives in fn, εr and ε_eff(0) against central
+     * differences of the formula (relative step 1e-6), over 0.1 ≤ u ≤ 10, 2 ≤ εr ≤ 12 and fn from 1e-4 to 60 GHz·mm.
+     */
+    @ParameterizedTest
+    @ValueSource(doubles = {0.1, 0.5, 1.9, 10.0})
+    void dispersionPartials(double u) {
+        MicrostripFormulas.Dispersion dispersion = new MicrostripFormulas.Dispersion(u);
+        double[] out = new double[4];
+        for (double er : new double[] {2.0, 4.2, 12.0}) {
+            double staticEffective = 1 + 0.7 * (er - 1);
+            for (double fn = 1e-4; fn < 60; fn *= 1.7) {
+                dispersion.evaluate(staticEffective, er, fn, Math.log(fn), out);
+                double f0 = fn;
+                double e0 = staticEffective;
+                double r0 = er;
+                DoubleFunction<Double> inFn = x -> MicrostripFormulas.dispersiveEffectivePermittivity(e0, u, r0, x * 1e6);
+                DoubleFunction<Double> inEr = x -> MicrostripFormulas.dispersiveEffectivePermittivity(e0, u, x, f0 * 1e6);
+                DoubleFunction<Double> inStatic = x -> MicrostripFormulas.dispersiveEffectivePermittivity(x, u, r0, f0 * 1e6);
+                double hFn = 1e-6 * fn;
+                double hEr = 1e-6 * er;
+                double hStatic = 1e-6 * staticEffective;
+                double byFn = (inFn.apply(fn + hFn) - inFn.apply(fn - hFn)) / (2 * hFn);
+                double byEr = (inEr.apply(er + hEr) - inEr.apply(er - hEr)) / (2 * hEr);
+                double byStatic = (inStatic.apply(staticEffective + hStatic) - inStatic.apply(staticEffective - hStatic))
+                        / (2 * hStatic);
+                // each on its natural scale: ε_eff per unit of ln fn, ln εr, ln ε_eff(0)
+                assertTrue(Math.abs(out[1] - byFn) * fn <= 1e-8 * out[0], "u " + u + " εr " + er + " fn " + fn);
+                assertTrue(Math.abs(out[2] - byEr) * er <= 1e-8 * out[0], "u " + u + " εr " + er + " fn " + fn);
+                assertTrue(Math.abs(out[3] - byStatic) * staticEffective <= 1e-8 * out[0],
+                        "u " + u + " εr " + er + " fn " + fn);
+            }
+        }
+    }
 }

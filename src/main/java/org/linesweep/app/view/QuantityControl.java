@@ -43,6 +43,8 @@ public final class QuantityControl extends VBox {
     private final Label message = new Label();
     private DoubleFunction<String> formatter;
     private double shownValue = Double.NaN;
+    /** The text last written for {@link #shownValue}; null when it must be written again. */
+    private String shownText;
     private double sliderMin;
     private double sliderMax;
     private boolean updating;
@@ -132,10 +134,16 @@ public final class QuantityControl extends VBox {
 
     /** Shows a value; re-centres the slider's range on it unless a drag is under way. */
     public void show(double value) {
+        // a design change re-shows every control; most did not change, and formatting is the costly part
+        if (value == shownValue && shownText != null && shownText.equals(text.getText())
+                && (slider == null || !slider.isValueChanging())) {
+            return;
+        }
         shownValue = value;
         updating = true;
         try {
             String shown = formatter.apply(value);
+            shownText = shown;
             if (!text.getText().equals(shown)) {
                 text.setText(shown);
             }
@@ -163,6 +171,7 @@ public final class QuantityControl extends VBox {
     /** Changes how values are written (metric or imperial) and re-shows the current one. */
     public void setFormatter(DoubleFunction<String> formatter) {
         this.formatter = formatter;
+        this.shownText = null;
         if (!Double.isNaN(shownValue)) {
             show(shownValue);
         }
