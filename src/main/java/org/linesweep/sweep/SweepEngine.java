@@ -17,6 +17,11 @@ public final class SweepEngine {
     private final double[] solution = new double[Telegrapher.SIZE];
     /** The last grid swept and what the models derive from it: a drag re-sweeps the same grid. */
     private final FrequencyColumns grid = new FrequencyColumns();
+    /** dR'/dω, dL'/dω, dG'/dω, dC'/dω of the sweep, between the engine's two passes. */
+    private double[] resistanceSlope = new double[0];
+    private double[] inductanceSlope = new double[0];
+    private double[] conductanceSlope = new double[0];
+    private double[] capacitanceSlope = new double[0];
 
     /** Computes a sweep into a new result. */
     public SweepResult run(LineModel model, double[] frequenciesHz, double lengthMetres) {
@@ -85,38 +90,54 @@ public final class SweepEngine {
         double[] groupVelocityColumn = reuse.groupVelocityMetresPerSecond;
         double[] permittivity = reuse.effectivePermittivity;
         double[] skinDepth = reuse.skinDepthMetres;
+        if (resistanceSlope.length < count) {
+            resistanceSlope = new double[count];
+            inductanceSlope = new double[count];
+            conductanceSlope = new double[count];
+            capacitanceSlope = new double[count];
+        }
+        double[] dr = resistanceSlope;
+        double[] dl = inductanceSlope;
+        double[] dg = conductanceSlope;
+        double[] dc = capacitanceSlope;
+        // two passes rather than one: each loop body is short enough for the processor to overlap consecutive
+        // points (a point is a long chain of dependent operations), which a single long body prevents
         for (int i = 0; i < count; i++) {
-            double f = frequenciesHz[i];
             p.setFrequency(columns, i);
             model.evaluatePoint(p);
-            double r = p.resistanceOhmPerMetre();
-            double l = p.inductanceHenryPerMetre();
-            double g = p.conductanceSiemensPerMetre();
-            double c = p.capacitanceFaradPerMetre();
+            frequency[i] = frequenciesHz[i];
+            resistance[i] = p.resistanceOhmPerMetre();
+            inductance[i] = p.inductanceHenryPerMetre();
+            conductance[i] = p.conductanceSiemensPerMetre();
+            capacitance[i] = p.capacitanceFaradPerMetre();
+            dr[i] = p.resistanceSlope();
+            dl[i] = p.inductanceSlope();
+            dg[i] = p.conductanceSlope();
+            dc[i] = p.capacitanceSlope();
+            permittivity[i] = p.effectivePermittivity();
+            skinDepth[i] = p.skinDepthMetres();
+        }
+        for (int i = 0; i < count; i++) {
+            double r = resistance[i];
+            double l = inductance[i];
+            double g = conductance[i];
+            double c = capacitance[i];
             double omega = columns.omega(i);
             Telegrapher.solve(r, l, g, c, omega, out);
             double alpha = out[Telegrapher.ALPHA];
             double beta = out[Telegrapher.BETA];
             double z0Re = out[Telegrapher.Z0_RE];
             double z0Im = out[Telegrapher.Z0_IM];
-            double groupVelocity = Telegrapher.groupVelocity(r, l, g, c, p.resistanceSlope(), p.inductanceSlope(),
-                    p.conductanceSlope(), p.capacitanceSlope(), omega, alpha, beta);
             // α ≈ (R' + G'·|Z0|²)/(2|Z0|) on a low-loss line, so the conductors' share of α is R'/(R' + G'·|Z0|²)
             double dielectricTerm = g * (z0Re * z0Re + z0Im * z0Im);
             double total = r + dielectricTerm;
-            frequency[i] = f;
-            resistance[i] = r;
-            inductance[i] = l;
-            conductance[i] = g;
-            capacitance[i] = c;
             z0Real[i] = z0Re;
             z0Imaginary[i] = z0Im;
             alphaColumn[i] = alpha;
             conductorAlpha[i] = total > 0 ? alpha * r / total : 0.0;
             betaColumn[i] = beta;
-            groupVelocityColumn[i] = groupVelocity;
-            permittivity[i] = p.effectivePermittivity();
-            skinDepth[i] = p.skinDepthMetres();
+            groupVelocityColumn[i] = Telegrapher.groupVelocity(r, l, g, c, dr[i], dl[i], dg[i], dc[i], omega, alpha,
+                    beta);
         }
         return reuse;
     }
