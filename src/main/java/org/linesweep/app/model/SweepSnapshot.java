@@ -24,11 +24,18 @@ import org.linesweep.sweep.SweepResult;
 public record SweepSnapshot(long sequence, Design design, LineModel model, SweepResult sweep, FrequencyLimits limits,
         LossRegions regions, List<String> warnings) {
 
-    /** Computes a snapshot; runs off the FX thread. */
+    /** Computes a snapshot with a new engine. */
     public static SweepSnapshot compute(long sequence, Design design) {
+        return compute(sequence, design, new SweepEngine(), design.sweep().grid().frequencies());
+    }
+
+    /**
+     * Computes a snapshot with the caller's engine (which must be its own: engines are not thread-safe) over the
+     * design's grid, given as its frequencies (read, not kept).
+     */
+    public static SweepSnapshot compute(long sequence, Design design, SweepEngine engine, double[] frequencies) {
         LineModel model = design.toModel();
-        SweepResult sweep = new SweepEngine().run(model, design.toPair(), design.sweep().grid().frequencies(),
-                design.lengthMetres());
+        SweepResult sweep = engine.run(model, design.toPair(), frequencies, design.lengthMetres());
         FrequencyLimits limits = LimitFinder.find(model, design.lengthMetres(), design.threshold(),
                 design.lossBudgetDb());
         return new SweepSnapshot(sequence, design, model, sweep, limits, LossRegions.of(model),
