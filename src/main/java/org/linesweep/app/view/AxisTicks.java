@@ -68,19 +68,12 @@ final class AxisTicks {
             return "0" + (unit.isEmpty() ? "" : " " + unit);
         }
         if (unit.isEmpty() && Math.abs(value) >= 1e-3 && Math.abs(value) < 1e4) {
-            String plain = String.format(Locale.ROOT, "%.4g", value);
-            if (plain.contains(".")) {
-                plain = plain.replaceAll("0+$", "").replaceAll("\\.$", "");
-            }
-            return plain;
+            return Display.stripZeros(String.format(Locale.ROOT, "%.4g", value));
         }
         int exponent = (int) Math.floor(Math.log10(Math.abs(value)) / 3 + 1e-9);
         exponent = Math.max(-5, Math.min(5, exponent));
         double scaled = value / Math.pow(1000, exponent);
-        String number = String.format(Locale.ROOT, "%.3g", scaled);
-        if (number.contains(".")) {
-            number = number.replaceAll("0+$", "").replaceAll("\\.$", "");
-        }
+        String number = Display.stripZeros(String.format(Locale.ROOT, "%.3g", scaled));
         String prefix = PREFIXES[exponent + 5];
         return number + (unit.isEmpty() && prefix.isEmpty() ? "" : " ") + prefix + unit;
     }

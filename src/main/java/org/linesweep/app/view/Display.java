@@ -56,11 +56,23 @@ public final class Display {
         return stripZeros(text);
     }
 
-    private static String stripZeros(String text) {
-        if (!text.contains(".")) {
+    /**
+     * Drops a decimal number's trailing zeros after its point, and then the point if nothing follows it
+     * ("1.500" → "1.5", "2.000" → "2"); text without a point is returned as it is. Written out rather than with
+     * regular expressions: read-outs and axis labels call it dozens of times a frame during a drag.
+     */
+    static String stripZeros(String text) {
+        if (text.indexOf('.') < 0) {
             return text;
         }
-        return text.replaceAll("0+$", "").replaceAll("\\.$", "");
+        int end = text.length();
+        while (end > 0 && text.charAt(end - 1) == '0') {
+            end--;
+        }
+        if (end > 0 && text.charAt(end - 1) == '.') {
+            end--;
+        }
+        return text.substring(0, end);
     }
 
     /** Attenuation unit label and factor from dB/m. */
