@@ -504,13 +504,18 @@ public final class FrequencyPlot extends Region {
             g.setLineWidth(1);
             g.setLineDashes();
             double height = bottom - TOP;
+            // one path of all the strokes, stroked once: a hundred separate lines per region cost a command
+            // and a rasterisation set-up each, at every step of a drag
+            g.beginPath();
             for (double x = from - height; x < to; x += 9) {
                 double x0 = Math.max(from, x);
                 double y0 = bottom - (x0 - x);
                 double x1 = Math.min(to, x + height);
                 double y1 = bottom - (x1 - x);
-                g.strokeLine(x0, y0, x1, y1);
+                g.moveTo(x0, y0);
+                g.lineTo(x1, y1);
             }
+            g.stroke();
         } else {
             g.setFill(region.color());
             g.fillRect(from, TOP, to - from, bottom - TOP);
