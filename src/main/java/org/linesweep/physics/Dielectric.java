@@ -62,35 +62,17 @@ public record Dielectric(double relativePermittivity, double lossTangent, double
     }
 
     /** Recently built permittivity tables by dielectric: a drag of the geometry keeps the dielectric. */
-    private static final java.util.Map<Dielectric, HermiteTable> RECENT_TABLES =
-            new java.util.LinkedHashMap<>(8, 0.75f, true) {
-                private static final long serialVersionUID = 1L;
-
-                @Override
-                protected boolean removeEldestEntry(java.util.Map.Entry<Dielectric, HermiteTable> eldest) {
-                    return size() > 8;
-                }
-            };
+    private static final RecentTables<Dielectric> RECENT_TABLES = new RecentTables<>(8);
 
     /** A table of ε(f) covering [lowHz, highHz]: a recent one of this dielectric if it covers the range, else new. */
     private static HermiteTable sharedTable(Dielectric dielectric, Evaluator evaluator, double lowHz, double highHz) {
-        synchronized (RECENT_TABLES) {
-            HermiteTable recent = RECENT_TABLES.get(dielectric);
-            if (recent != null && recent.covers(lowHz) && recent.covers(highHz)) {
-                return recent;
-            }
-        }
-        HermiteTable built = new HermiteTable((frequencyHz, out) -> {
+        return RECENT_TABLES.covering(dielectric, lowHz, highHz, () -> new HermiteTable((frequencyHz, out) -> {
             double dOmegaDf = 2 * Math.PI;
             out[0] = evaluator.real(frequencyHz);
             out[1] = evaluator.imaginary(frequencyHz);
             out[2] = evaluator.realSlope(frequencyHz) * dOmegaDf;
             out[3] = evaluator.imaginarySlope(frequencyHz) * dOmegaDf;
-        }, lowHz, highHz, Evaluator.TABLE_NODES_PER_UNIT_LOG);
-        synchronized (RECENT_TABLES) {
-            RECENT_TABLES.put(dielectric, built);
-        }
-        return built;
+        }, lowHz, highHz, Evaluator.TABLE_NODES_PER_UNIT_LOG));
     }
 
     /** Evaluates ε′(f) and ε″(f) cheaply: the wideband fit is computed once. */

@@ -131,29 +131,12 @@ public final class InternalImpedance {
     static final int TUBE_TABLE_NODES_PER_UNIT_LOG = 128;
 
     /** Recently built tube tables by c/b: a drag of anything but the outer conductor keeps c/b and b/δ. */
-    private static final java.util.Map<Double, HermiteTable> RECENT_TUBE_TABLES =
-            new java.util.LinkedHashMap<>(8, 0.75f, true) {
-                private static final long serialVersionUID = 1L;
-
-                @Override
-                protected boolean removeEldestEntry(java.util.Map.Entry<Double, HermiteTable> eldest) {
-                    return size() > 8;
-                }
-            };
+    private static final RecentTables<Double> RECENT_TUBE_TABLES = new RecentTables<>(8);
 
     /** A tube table for c/b covering [xMin, xMax]: a recent one if it covers the range, else a new one. */
     static HermiteTable sharedTubeTable(double outerOverInnerRadius, double xMin, double xMax) {
-        synchronized (RECENT_TUBE_TABLES) {
-            HermiteTable recent = RECENT_TUBE_TABLES.get(outerOverInnerRadius);
-            if (recent != null && recent.covers(xMin) && recent.covers(xMax)) {
-                return recent;
-            }
-        }
-        HermiteTable built = tubeTable(outerOverInnerRadius, xMin, xMax);
-        synchronized (RECENT_TUBE_TABLES) {
-            RECENT_TUBE_TABLES.put(outerOverInnerRadius, built);
-        }
-        return built;
+        return RECENT_TUBE_TABLES.covering(outerOverInnerRadius, xMin, xMax,
+                () -> tubeTable(outerOverInnerRadius, xMin, xMax));
     }
 
     /**
