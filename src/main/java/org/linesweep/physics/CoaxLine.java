@@ -2,7 +2,6 @@ package org.linesweep.physics;
 
 import java.util.ArrayList;
 import java.util.List;
-import org.apache.commons.math3.complex.Complex;
 
 /**
  * Coaxial line: solid round inner conductor of radius a, tubular outer conductor of inner radius b and

@@ -30,8 +30,6 @@ public final class MicrostripLine extends LineModel {
     private final double widthMetres;
     private final double heightMetres;
     private final double thicknessMetres;
-    private final double stripDerivativeOhmPerMetre;
-    private final double groundDerivativeOhmPerMetre;
     private final double[] constantStatic;
     /**
      * The Hammerstad-Jensen static values (Z0 as the real part, ε_eff(0) as the imaginary part) against ε′,
@@ -57,11 +55,11 @@ public final class MicrostripLine extends LineModel {
         this.heightMetres = heightMetres;
         this.thicknessMetres = thicknessMetres;
         double dn = WHEELER_STEP_FRACTION * thicknessMetres;
-        this.stripDerivativeOhmPerMetre =
+        double stripDerivativeOhmPerMetre =
                 (MicrostripFormulas.airImpedance(widthMetres - 2 * dn, heightMetres + dn, thicknessMetres - 2 * dn)
                 - MicrostripFormulas.airImpedance(widthMetres + 2 * dn, heightMetres - dn, thicknessMetres + 2 * dn))
                 / (2 * dn);
-        this.groundDerivativeOhmPerMetre =
+        double groundDerivativeOhmPerMetre =
                 (MicrostripFormulas.airImpedance(widthMetres, heightMetres + dn, thicknessMetres)
                 - MicrostripFormulas.airImpedance(widthMetres, heightMetres - dn, thicknessMetres)) / (2 * dn);
         this.constantStatic = permittivity.isConstant() ? staticAt(dielectric.relativePermittivity()) : null;

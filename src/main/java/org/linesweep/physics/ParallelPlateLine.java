@@ -2,7 +2,6 @@ package org.linesweep.physics;
 
 import java.util.ArrayList;
 import java.util.List;
-import org.apache.commons.math3.complex.Complex;
 
 /**
  * Two plates of width w and thickness t at separation d, fringing neglected: F = w/d, so C' = εw/d and

@@ -2,7 +2,6 @@ package org.linesweep.physics;
 
 import java.util.ArrayList;
 import java.util.List;
-import org.apache.commons.math3.complex.Complex;
 
 /**
  * Stripline: a strip of width w and thickness t centred between ground planes spaced b, in a homogeneous
@@ -25,8 +24,6 @@ public final class StriplineLine extends HomogeneousTemLine {
     private final double spacingMetres;
     private final double thicknessMetres;
     private final double capacitanceFactor;
-    private final double stripDerivativeOhmPerMetre;
-    private final double groundDerivativeOhmPerMetre;
 
     public StriplineLine(double widthMetres, double spacingMetres, double thicknessMetres, Conductor conductor,
             Dielectric dielectric) {
@@ -37,11 +34,11 @@ public final class StriplineLine extends HomogeneousTemLine {
         this.capacitanceFactor = PhysicalConstants.FREE_SPACE_IMPEDANCE_OHM
                 / StriplineFormulas.airImpedance(widthMetres, spacingMetres, thicknessMetres);
         double dn = WHEELER_STEP_FRACTION * thicknessMetres;
-        this.stripDerivativeOhmPerMetre =
+        double stripDerivativeOhmPerMetre =
                 (StriplineFormulas.airImpedance(widthMetres - 2 * dn, spacingMetres, thicknessMetres - 2 * dn)
                 - StriplineFormulas.airImpedance(widthMetres + 2 * dn, spacingMetres, thicknessMetres + 2 * dn))
                 / (2 * dn);
-        this.groundDerivativeOhmPerMetre =
+        double groundDerivativeOhmPerMetre =
                 (StriplineFormulas.airImpedance(widthMetres, spacingMetres + 2 * dn, thicknessMetres)
                 - StriplineFormulas.airImpedance(widthMetres, spacingMetres - 2 * dn, thicknessMetres)) / (2 * dn);
         double eta0 = PhysicalConstants.FREE_SPACE_IMPEDANCE_OHM;

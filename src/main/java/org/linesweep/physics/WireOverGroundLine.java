@@ -1,7 +1,6 @@
 package org.linesweep.physics;
 
 import java.util.List;
-import org.apache.commons.math3.complex.Complex;
 
 /**
  * A round wire of radius a with its centre at height h over an infinite ground plane, in a homogeneous
