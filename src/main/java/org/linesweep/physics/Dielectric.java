@@ -178,12 +178,9 @@ public record Dielectric(double relativePermittivity, double lossTangent, double
 
         /** Nodes per unit of ln f in a sweep's permittivity table. */
         static final int TABLE_NODES_PER_UNIT_LOG = 64;
-        /** A table is built only for sweeps with at least this many points per node. */
-        static final double POINTS_PER_TABLE_NODE = 1.5;
-
         /**
          * Tabulates the wideband model's ε(f) over [lowHz, highHz] when a sweep of {@code count} points there
-         * has at least {@link #POINTS_PER_TABLE_NODE} points per node (a node costs one closed-form evaluation, a
+         * has at least {@link HermiteTable#POINTS_PER_NODE} points per node (a node costs one closed-form evaluation, a
          * logarithm and two arc tangents; a lookup a fraction of that), reusing a recent table of the same
          * dielectric when it covers the range. The model is smooth on the scale of one unit of ln f, so 64
          * nodes per unit hold the value within about 2.5e-10 and the slope within about 5e-10 of the closed form
@@ -197,8 +194,7 @@ public record Dielectric(double relativePermittivity, double lossTangent, double
             if (existing != null && existing.covers(lowHz) && existing.covers(highHz)) {
                 return;
             }
-            double nodes = Math.log(highHz / lowHz) * TABLE_NODES_PER_UNIT_LOG + 1;
-            if (nodes * POINTS_PER_TABLE_NODE <= count) {
+            if (HermiteTable.pays(lowHz, highHz, TABLE_NODES_PER_UNIT_LOG, count)) {
                 table = sharedTable(dielectric, this, lowHz, highHz);
             }
         }

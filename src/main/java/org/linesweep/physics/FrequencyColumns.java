@@ -34,15 +34,16 @@ public final class FrequencyColumns {
             sqrtFrequency = new double[count];
             inverseSqrtFrequency = new double[count];
         }
+        // the values come from LineParameters.setFrequency, so a grid point and a single point agree exactly
+        LineParameters point = new LineParameters();
         for (int i = 0; i < count; i++) {
-            double f = frequenciesHz[i];
-            double root = Math.sqrt(f);
-            frequencyHz[i] = f;
-            omega[i] = 2 * Math.PI * f;
-            inverseOmega[i] = 1.0 / (2 * Math.PI * f);
-            logFrequency[i] = Math.log(f);
-            sqrtFrequency[i] = root;
-            inverseSqrtFrequency[i] = 1.0 / root;
+            point.setFrequency(frequenciesHz[i]);
+            frequencyHz[i] = point.frequencyHz;
+            omega[i] = point.omega;
+            inverseOmega[i] = point.inverseOmega;
+            logFrequency[i] = point.logFrequency;
+            sqrtFrequency[i] = point.sqrtFrequency;
+            inverseSqrtFrequency[i] = point.inverseSqrtFrequency;
         }
         this.count = count;
     }

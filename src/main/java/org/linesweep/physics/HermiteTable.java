@@ -34,6 +34,21 @@ final class HermiteTable {
      */
     private final double[] cells;
 
+    /**
+     * A sweep table is built only when the sweep has at least this many points per node in the table's range: a
+     * node costs about what an exact point does, a look-up a small fraction of it.
+     */
+    static final double POINTS_PER_NODE = 1.5;
+
+    /**
+     * True when a table over [xMin, xMax] at {@code nodesPerUnitLog} would cost less than evaluating the
+     * {@code points} points that fall in that range exactly (see {@link #POINTS_PER_NODE}).
+     */
+    static boolean pays(double xMin, double xMax, int nodesPerUnitLog, int points) {
+        double nodes = Math.log(xMax / xMin) * nodesPerUnitLog + 1;
+        return nodes * POINTS_PER_NODE <= points;
+    }
+
     /** Several complex functions of the same x evaluated together: writes {Re F, Im F, Re F′, Im F′} for each. */
     interface SeveralSource {
         void evaluate(double x, double[] out);

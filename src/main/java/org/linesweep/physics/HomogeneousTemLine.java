@@ -38,8 +38,8 @@ public abstract class HomogeneousTemLine extends LineModel {
 
     /** Prepares the dielectric's and the conductors' tables for the sweep (see {@link LineModel#prepareForSweep}). */
     @Override
-    public void prepareForSweep(double[] frequenciesHz, int count) {
-        super.prepareForSweep(frequenciesHz, count);
+    protected void prepareForRange(double[] frequenciesHz, int count, double lowHz, double highHz) {
+        super.prepareForRange(frequenciesHz, count, lowHz, highHz);
         for (SkinEffectTerm term : conductorTerms) {
             term.prepareForSweep(frequenciesHz, count);
         }

@@ -80,7 +80,6 @@ public final class InternalImpedance {
         return new Complex[] {ratio, slope};
     }
 
-
     /**
      * Internal impedance per metre of a solid round wire of the given radius, including Hammerstad's
      * roughness factor.
@@ -123,9 +122,6 @@ public final class InternalImpedance {
         return tubeRatio(x, outerRadiusMetres / innerRadiusMetres)
                 .multiply(dcResistance * conductor.roughnessFactor(frequencyHz));
     }
-
-
-
 
     /** Nodes per unit of ln(b/δ) in a tube table. */
     static final int TUBE_TABLE_NODES_PER_UNIT_LOG = 128;
@@ -274,7 +270,6 @@ public final class InternalImpedance {
         // Z_s·σt = (k t)·coth(k t) = u·coth(u)
         return flatRatioWithSlope(thicknessMetres / delta)[0].multiply(roughness / (sigma * thicknessMetres));
     }
-
 
     /**
      * A flat conductor's Z_s/R_dc = u·coth u with u = (1 + j)·t/δ, and its derivative in t/δ: a function of t/δ

@@ -74,7 +74,7 @@ public abstract class LineModel {
                 p.roughnessSlope = f[2] * p.inverseOmega;
             } else {
                 double v = roughnessPerHertz * frequencyHz;
-                p.roughness = 1.0 + (2.0 / Math.PI) * Math.atan(v);
+                p.roughness = conductor.roughnessFactor(frequencyHz);
                 p.roughnessSlope = (2.0 / Math.PI) * v / (omega * (1.0 + v * v));
             }
         } else {
@@ -136,19 +136,28 @@ public abstract class LineModel {
      * Told by the sweep engine which frequencies are about to be evaluated, so a line type may tabulate an
      * expensive part of its model over just that range when that costs less than evaluating it exactly at
      * each point. Results stay within the tables' stated accuracy of the exact model (see
-     * {@code HermiteTable}); safe to call from any thread. The default tabulates a wideband dielectric's ε(f) over the sweep's range; line types that override
-     * this call it too.
+     * {@code HermiteTable}); safe to call from any thread. It finds the sweep's range and hands it to
+     * {@link #prepareForRange}, which tabulates a wideband dielectric's ε(f) and, in line types that override it,
+     * their own parts (when {@code HermiteTable.pays}).
      *
      * @param count number of frequencies of {@code frequenciesHz} to be used
      */
-    public void prepareForSweep(double[] frequenciesHz, int count) {
+    public final void prepareForSweep(double[] frequenciesHz, int count) {
         double low = Double.POSITIVE_INFINITY;
         double high = 0.0;
         for (int i = 0; i < count; i++) {
             low = Math.min(low, frequenciesHz[i]);
             high = Math.max(high, frequenciesHz[i]);
         }
-        permittivity.prepareForSweep(low, high, count);
+        prepareForRange(frequenciesHz, count, low, high);
+    }
+
+    /**
+     * {@link #prepareForSweep} with the sweep's lowest and highest frequency found: line types that tabulate
+     * more override this and call it first.
+     */
+    protected void prepareForRange(double[] frequenciesHz, int count, double lowHz, double highHz) {
+        permittivity.prepareForSweep(lowHz, highHz, count);
     }
 
     /**

@@ -108,8 +108,6 @@ public final class MicrostripLine extends LineModel {
 
     /** Nodes per unit of ln f in the substrate tables. */
     static final int SUBSTRATE_TABLE_NODES_PER_UNIT_LOG = 64;
-    /** The substrate tables are built only for sweeps with at least this many points per node. */
-    static final double POINTS_PER_SUBSTRATE_NODE = 1.5;
 
     /**
      * Two tables over the sweep, when it is dense enough that they cost less than evaluating each point:
@@ -121,21 +119,15 @@ public final class MicrostripLine extends LineModel {
      * Kirschning-Jansen's dispersion, the filling factor) is a smooth function of ln f, so it is tabulated
      * against ln f at {@link #SUBSTRATE_TABLE_NODES_PER_UNIT_LOG} nodes per unit (two lookups a point instead of
      * five exponentials, a logarithm and a dozen multiplications), when the sweep has at least
-     * {@link #POINTS_PER_SUBSTRATE_NODE} points per node. Held within 3e-10 of point-by-point evaluation
+     * {@link HermiteTable#POINTS_PER_NODE} points per node. Held within 3e-10 of point-by-point evaluation
      * (tested).</li>
      * </ul>
      */
     @Override
-    public void prepareForSweep(double[] frequenciesHz, int count) {
-        super.prepareForSweep(frequenciesHz, count);
+    protected void prepareForRange(double[] frequenciesHz, int count, double lowHz, double highHz) {
+        super.prepareForRange(frequenciesHz, count, lowHz, highHz);
         if (count < 16) {
             return;
-        }
-        double lowHz = Double.POSITIVE_INFINITY;
-        double highHz = 0.0;
-        for (int i = 0; i < count; i++) {
-            lowHz = Math.min(lowHz, frequenciesHz[i]);
-            highHz = Math.max(highHz, frequenciesHz[i]);
         }
         if (!(highHz > lowHz) || !(lowHz > 0)) {
             return;
@@ -153,8 +145,7 @@ public final class MicrostripLine extends LineModel {
         if (existing != null && existing[0].covers(lowHz) && existing[0].covers(highHz)) {
             return;
         }
-        double nodes = Math.log(highHz / lowHz) * SUBSTRATE_TABLE_NODES_PER_UNIT_LOG + 1;
-        if (nodes * POINTS_PER_SUBSTRATE_NODE <= count) {
+        if (HermiteTable.pays(lowHz, highHz, SUBSTRATE_TABLE_NODES_PER_UNIT_LOG, count)) {
             LineParameters node = new LineParameters();
             double[] values = new double[8];
             double dOmegaDf = 2 * Math.PI;

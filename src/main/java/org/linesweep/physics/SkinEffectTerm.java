@@ -87,16 +87,12 @@ final class SkinEffectTerm {
         return sizeAtOneHertz * Math.sqrt(frequencyHz);
     }
 
-    /** Nodes per unit of ln(b/δ) in a tube's own table. */
-    static final int TUBE_TABLE_NODES_PER_UNIT_LOG = InternalImpedance.TUBE_TABLE_NODES_PER_UNIT_LOG;
-    /** A tube table is built only for sweeps with at least this many thin-wall points per node. */
-    static final double POINTS_PER_TUBE_NODE = 1.5;
     /** Below b/δ = 0.01 the tube is at its DC value to 1e-9; the exact form is cheap there. */
     static final double TUBE_TABLE_SMALLEST_X = 0.01;
 
     /**
      * For a tube: tabulates its thin-wall Z/R_dc (b/δ below 20 skin depths of wall) over the sweep's range when
-     * the sweep has at least {@link #POINTS_PER_TUBE_NODE} points there per table node (a node costs one exact
+     * the sweep has at least {@link HermiteTable#POINTS_PER_NODE} points there per table node (a node costs one exact
      * evaluation, four complex Bessel functions), reusing a recent table of the same c/b when it covers the
      * range. Other shapes read shared tables and need nothing.
      */
@@ -120,8 +116,7 @@ final class SkinEffectTerm {
         if (inside < 2 || !(high > low) || (existing != null && existing.covers(low) && existing.covers(high))) {
             return;
         }
-        double nodes = Math.log(high / low) * TUBE_TABLE_NODES_PER_UNIT_LOG + 1;
-        if (nodes * POINTS_PER_TUBE_NODE <= inside) {
+        if (HermiteTable.pays(low, high, InternalImpedance.TUBE_TABLE_NODES_PER_UNIT_LOG, inside)) {
             tubeTable = InternalImpedance.sharedTubeTable(kappa, low, high);
         }
     }
