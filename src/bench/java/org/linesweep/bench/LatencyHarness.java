@@ -1,5 +1,7 @@
 package org.linesweep.bench;
 
+import com.sun.javafx.tk.RenderJob;
+import com.sun.javafx.tk.Toolkit;
 import java.lang.management.ManagementFactory;
 import java.util.ArrayList;
 import java.util.Arrays;
@@ -38,16 +40,21 @@ import org.linesweep.sweep.SweepResult;
  *
  * <p>For each step it records (a) the FX-thread time the update costs: the slider's change handling in the
  * pulse that sets it, the handling of the finished sweep when it arrives (a {@code runLater} from the sweep
- * thread) and the layout pass of the pulse that draws it (pre- to post-layout pulse listener), and (b) the
- * time from setting the value to the end of the layout pass of the pulse that has drawn the result of that
- * step (or a newer one) on all four plots. The render thread's rasterisation of that frame is not included:
- * JavaFX offers no public hook for it.
+ * thread) and the CSS and layout passes of the pulse that draws it (pre- to post-layout pulse listener);
+ * (b) the time from setting the value to the end of the layout pass of the pulse that has drawn the result
+ * of that step (or a newer one) on all four plots; and (c) the total latency, to the end of the render
+ * thread's painting of that pulse's frame. For (c), a {@code runLater} posted from that pulse runs as soon as
+ * the pulse ends, when the pulse's paint job is already queued on the render thread, and queues a job
+ * behind it ({@code Toolkit.addRenderJob}, JavaFX's own internal hook: the render thread is a single-thread
+ * queue, so the job runs when the frame has been painted and handed to the window); the job reads the clock.
+ * The next step is set in the next pulse, as a drag would, without waiting for the paint.
  *
  * <p>Mode {@code baseline} draws the same four quantities with the stock {@code LineChart} on a log
  * {@code ValueAxis}, animation and symbols off, fed the same snapshots.
  *
  * <p>Arguments: mode (explorer|baseline), points. Prints
- * {@code LATENCY mode=… points=… fx_p50_ms=… total_p50_ms=… total_p95_ms=… heap_mb=… final_on_screen=…}.
+ * {@code LATENCY mode=… points=… fx_p50_ms=… layout_p50_ms=… total_p50_ms=… total_p95_ms=… heap_mb=…
+ * final_on_screen=…}.
  */
 public final class LatencyHarness extends Application {
 
@@ -55,7 +62,10 @@ public final class LatencyHarness extends Application {
     private static final int MEASURED = 300;
 
     private final List<Double> fxTimes = new ArrayList<>();
+    private final List<Double> layoutTimes = new ArrayList<>();
     private final List<Double> totalTimes = new ArrayList<>();
+    /** Measured steps whose frame the render thread has not reported painted yet. */
+    private int paintsPending;
     private ExplorerModel model;
     private List<FrequencyPlot> plots;
     private int[] drawCounts;
@@ -161,11 +171,24 @@ public final class LatencyHarness extends Application {
         if (current && drawn) {
             if (step >= WARM_UP) {
                 fxTimes.add(fxThisStep);
-                totalTimes.add((end - stepStart) / 1e6);
+                layoutTimes.add((end - stepStart) / 1e6);
+                timePaint(stepStart);
             }
             step++;
             waiting = false;
         }
+    }
+
+    /** Records when the frame of the pulse now ending has been painted (see the class comment). */
+    private void timePaint(long start) {
+        paintsPending++;
+        Platform.runLater(() -> Toolkit.getToolkit().addRenderJob(new RenderJob(() -> {
+            long painted = System.nanoTime();
+            Platform.runLater(() -> {
+                totalTimes.add((painted - start) / 1e6);
+                paintsPending--;
+            });
+        })));
     }
 
     private boolean allRedrawn() {
@@ -178,16 +201,22 @@ public final class LatencyHarness extends Application {
     }
 
     private void finish(int points, Slider slider) {
+        if (paintsPending > 0) {
+            Platform.runLater(() -> finish(points, slider)); // the last frames are still being painted
+            return;
+        }
         slider.setValueChanging(false);
         SweepSnapshot shown = model.snapshotProperty().get();
         boolean finalShown = shown != null && shown.design().equals(model.getDesign());
         System.gc();
         double heapMb = (ManagementFactory.getMemoryMXBean().getHeapMemoryUsage().getUsed()) / 1048576.0;
         System.out.printf(Locale.ROOT,
-                "LATENCY mode=%s points=%d plots=4 steps=%d fx_p50_ms=%.2f fx_p95_ms=%.2f total_p50_ms=%.2f"
-                        + " total_p95_ms=%.2f heap_after_gc_mb=%.1f max_heap_mb=%.0f final_on_screen=%s%n",
+                "LATENCY mode=%s points=%d plots=4 steps=%d fx_p50_ms=%.2f fx_p95_ms=%.2f layout_p50_ms=%.2f"
+                        + " layout_p95_ms=%.2f total_p50_ms=%.2f total_p95_ms=%.2f heap_after_gc_mb=%.1f"
+                        + " max_heap_mb=%.0f final_on_screen=%s%n",
                 baseline ? "baseline" : "explorer", points, fxTimes.size(), percentile(fxTimes, 50),
-                percentile(fxTimes, 95), percentile(totalTimes, 50), percentile(totalTimes, 95), heapMb,
+                percentile(fxTimes, 95), percentile(layoutTimes, 50), percentile(layoutTimes, 95),
+                percentile(totalTimes, 50), percentile(totalTimes, 95), heapMb,
                 Runtime.getRuntime().maxMemory() / 1048576.0, finalShown);
         worker.shutdownNow();
         Platform.exit();
