@@ -93,6 +93,7 @@ public final class ExplorerWindow {
         designScroll.setFitToWidth(true);
         designScroll.setPrefWidth(370);
         designScroll.setMinWidth(280);
+        paintViewportDirectly(designScroll);
         warnings.setId("warning-strip");
         warnings.getStyleClass().add("warning-strip");
         warnings.setWrapText(true);
@@ -105,6 +106,7 @@ public final class ExplorerWindow {
         ScrollPane readoutScroll = new ScrollPane(readout);
         readoutScroll.setFitToWidth(true);
         readoutScroll.setPrefWidth(330);
+        paintViewportDirectly(readoutScroll);
         javafx.scene.control.TabPane tools = new javafx.scene.control.TabPane(
                 new javafx.scene.control.Tab("Compare", compare),
                 new javafx.scene.control.Tab("Sensitivity", new ScrollPane(sensitivity)),
@@ -479,5 +481,19 @@ public final class ExplorerWindow {
         } catch (IOException | RuntimeException e) {
             model.report("Could not export the review pack " + target.getFileName() + ": " + e.getMessage());
         }
+    }
+
+    /**
+     * A scroll pane caches its viewport as one image, so a change anywhere inside repaints all of it. The
+     * design panel (the dragged slider and its field) and the read-out change on every step of a drag, so
+     * their viewports are painted directly: only the changed areas are repainted.
+     */
+    private static void paintViewportDirectly(ScrollPane pane) {
+        pane.skinProperty().addListener((o, old, skin) -> {
+            javafx.scene.Node viewport = pane.lookup(".viewport");
+            if (viewport != null) {
+                viewport.setCache(false);
+            }
+        });
     }
 }

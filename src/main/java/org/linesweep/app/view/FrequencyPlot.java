@@ -1,6 +1,7 @@
 package org.linesweep.app.view;
 
 import java.util.ArrayList;
+import java.util.Arrays;
 import java.util.List;
 import java.util.function.DoubleConsumer;
 import javafx.geometry.VPos;
@@ -36,6 +37,7 @@ public final class FrequencyPlot extends Region {
     private static final double TOP = 26;
     private static final double RIGHT_PLAIN = 14;
     private static final double RIGHT_SECONDARY = 62;
+    private static final double[] NO_DASH = {};
 
     private final Canvas background = new Canvas();
     private final Canvas foreground = new Canvas();
@@ -67,6 +69,10 @@ public final class FrequencyPlot extends Region {
     private boolean decimation = true;
     /** Drops decimated points within a tenth of a pixel of the drawn segment (invisible, and cheaper to draw). */
     private final PathSimplifier path = new PathSimplifier(0.1);
+    /** Horizontal pixels of the grid {@link #pixelColumnOf}, valid during one drawing of the curves. */
+    private double[] pixelColumn = new double[0];
+    private double[] pixelColumnOf;
+    private int pixelColumnCount;
     /** A decimated column whose values span less than this is drawn as one point at its middle. */
     static final double FLAT_COLUMN_PIXELS = 0.2;
 
@@ -251,11 +257,49 @@ public final class FrequencyPlot extends Region {
 
     /** Horizontal position of a frequency in this node's coordinates. */
     public double xOf(double frequencyHz) {
-        if (horizontalScale == Scale.LINEAR) {
-            return LEFT + (frequencyHz - minHz) / (maxHz - minHz) * plotWidth();
+        return horizontalMapping().pixel(frequencyHz);
+    }
+
+    /**
+     * From a value to a pixel along one axis: {@code offset + slope * value}, or of log10 value on a log
+     * axis. Worked out once for a drawing, so a point costs one logarithm at most.
+     */
+    private record AxisMapping(boolean log, double offset, double slope) {
+        static AxisMapping of(boolean log, double low, double high, double pixelAtLow, double pixelAtHigh) {
+            double from = log ? Math.log10(low) : low;
+            double to = log ? Math.log10(high) : high;
+            double slope = (pixelAtHigh - pixelAtLow) / (to - from);
+            return new AxisMapping(log, pixelAtLow - slope * from, slope);
         }
-        return LEFT + (Math.log10(frequencyHz) - Math.log10(minHz)) / (Math.log10(maxHz) - Math.log10(minHz))
-                * plotWidth();
+
+        double pixel(double value) {
+            return offset + slope * (log ? Math.log10(value) : value);
+        }
+    }
+
+    private AxisMapping horizontalMapping() {
+        return AxisMapping.of(horizontalScale != Scale.LINEAR, minHz, maxHz, LEFT, LEFT + plotWidth());
+    }
+
+    private AxisMapping verticalMapping(boolean right) {
+        double[] r = right ? rightRange : yRange;
+        Scale s = right ? rightScale : yScale;
+        return AxisMapping.of(s == Scale.LOG, r[0], r[1], TOP + plotHeight(), TOP);
+    }
+
+    /** The horizontal pixel of each frequency of a grid, shared by every curve drawn on that grid. */
+    private double[] pixelColumn(double[] frequencies, int count, AxisMapping mapping) {
+        if (frequencies != pixelColumnOf || count > pixelColumnCount) {
+            if (pixelColumn.length < count) {
+                pixelColumn = new double[count];
+            }
+            for (int i = 0; i < count; i++) {
+                pixelColumn[i] = mapping.pixel(frequencies[i]);
+            }
+            pixelColumnOf = frequencies;
+            pixelColumnCount = count;
+        }
+        return pixelColumn;
     }
 
     private double rightMargin() {
@@ -271,12 +315,7 @@ public final class FrequencyPlot extends Region {
     }
 
     private double yOf(double value, boolean right) {
-        double[] r = right ? rightRange : yRange;
-        Scale s = right ? rightScale : yScale;
-        double fraction = s == Scale.LOG
-                ? (Math.log10(value) - Math.log10(r[0])) / (Math.log10(r[1]) - Math.log10(r[0]))
-                : (value - r[0]) / (r[1] - r[0]);
-        return TOP + (1 - fraction) * plotHeight();
+        return verticalMapping(right).pixel(value);
     }
 
     private void markBackground() {
@@ -327,17 +366,34 @@ public final class FrequencyPlot extends Region {
     /**
      * Keeps the current axis range while the new data's range lies inside it and fills at least half of it
      * (in log units for a log axis): during a drag the grid and labels then stay put instead of being
-     * redrawn on every step.
+     * redrawn on every step. When the data drift out of it a little (the new range overlaps the current one
+     * and is of a similar span, as in a drag), the new range leaves headroom on the side they left by (a
+     * fifth of the span, or a quarter decade), so the next steps of the drag stay inside it too.
      */
-    private static double[] stable(double[] current, double[] wanted, Scale scale) {
+    static double[] stable(double[] current, double[] wanted, Scale scale) {
         boolean log = scale == Scale.LOG;
+        if (log && current[0] <= 0) {
+            return wanted;
+        }
         double currentSpan = log ? Math.log10(current[1] / current[0]) : current[1] - current[0];
         double wantedSpan = log ? Math.log10(wanted[1] / wanted[0]) : wanted[1] - wanted[0];
         boolean inside = wanted[0] >= current[0] && wanted[1] <= current[1];
-        if (inside && wantedSpan >= 0.5 * currentSpan && !(log && current[0] <= 0)) {
+        if (inside && wantedSpan >= 0.5 * currentSpan) {
             return current;
         }
-        return wanted;
+        boolean drifting = wanted[0] < current[1] && wanted[1] > current[0]
+                && wantedSpan >= 0.5 * currentSpan && wantedSpan <= 2 * currentSpan;
+        if (!drifting) {
+            return wanted;
+        }
+        if (log) {
+            double quarterDecade = Math.pow(10, 0.25);
+            return new double[] {wanted[0] < current[0] ? wanted[0] / quarterDecade : wanted[0],
+                wanted[1] > current[1] ? wanted[1] * quarterDecade : wanted[1]};
+        }
+        double headroom = 0.2 * wantedSpan;
+        return niceRange(wanted[0] < current[0] ? wanted[0] - headroom : wanted[0],
+                wanted[1] > current[1] ? wanted[1] + headroom : wanted[1]);
     }
 
     private static double[] niceRange(double min, double max) {
@@ -353,9 +409,15 @@ public final class FrequencyPlot extends Region {
         if (background.getWidth() != width || background.getHeight() != height) {
             background.setWidth(width);
             background.setHeight(height);
-            foreground.setWidth(width);
-            foreground.setHeight(height);
             backgroundDirty = true;
+            foregroundDirty = true;
+        }
+        // the curves' layer covers the plot area only: every step of a drag repaints it, and the software
+        // pipeline's cost of compositing a layer grows with its area (a third less than the whole plot)
+        if (foreground.getWidth() != plotWidth() || foreground.getHeight() != plotHeight()) {
+            foreground.setWidth(plotWidth());
+            foreground.setHeight(plotHeight());
+            foreground.relocate(LEFT, TOP);
             foregroundDirty = true;
         }
         if (backgroundDirty) {
@@ -388,8 +450,8 @@ public final class FrequencyPlot extends Region {
                 ? AxisTicks.linear(minHz, maxHz, horizontalUnit, Math.max(3, (int) (plotWidth() / 95))) : AxisTicks.log(minHz, maxHz, horizontalUnit);
         for (AxisTicks.Tick tick : horizontalTicks) {
             double x = Math.round(xOf(tick.value())) + 0.5;
-            g.setStroke(tick.major() ? grid : grid.interpolate(paper, 0.55));
-            g.strokeLine(x, TOP, x, bottom);
+            g.setFill(tick.major() ? grid : grid.interpolate(paper, 0.55));
+            fillVerticalLine(g, x, TOP, bottom, 1, NO_DASH);
             if (!tick.label().isEmpty()) {
                 g.setFill(ink);
                 g.fillText(tick.label(), x, bottom + 4);
@@ -426,8 +488,8 @@ public final class FrequencyPlot extends Region {
                 continue;
             }
             if (!right) {
-                g.setStroke(tick.major() ? grid : grid.interpolate(paper, 0.55));
-                g.strokeLine(LEFT, y, plotRight, y);
+                g.setFill(tick.major() ? grid : grid.interpolate(paper, 0.55));
+                g.fillRect(LEFT - 0.5, y - 0.5, plotRight - LEFT + 1, 1); // a 1-pixel line, as filled
             }
             if (!tick.label().isEmpty()) {
                 g.setFill(ink);
@@ -440,8 +502,11 @@ public final class FrequencyPlot extends Region {
         drawCount++;
         GraphicsContext g = foreground.getGraphicsContext2D();
         g.clearRect(0, 0, foreground.getWidth(), foreground.getHeight());
+        pixelColumnOf = null; // the axes may have moved since the last drawing
         double bottom = TOP + plotHeight();
         double right = LEFT + plotWidth();
+        g.save();
+        g.translate(-LEFT, -TOP); // the layer sits at the plot area's corner; draw in the plot's coordinates
         g.save();
         g.beginPath();
         g.rect(LEFT, TOP, plotWidth(), plotHeight());
@@ -465,12 +530,8 @@ public final class FrequencyPlot extends Region {
                 continue;
             }
             double x = Math.round(xOf(marker.frequencyHz())) + 0.5;
-            g.setStroke(marker.color());
-            g.setLineWidth(1.5 * lineScale);
-            g.setLineDashes(marker.dash());
-            g.strokeLine(x, TOP, x, bottom);
-            g.setLineDashes();
             g.setFill(marker.color());
+            fillVerticalLine(g, x, TOP, bottom, 1.5 * lineScale, marker.dash());
             double labelY = TOP + 16 + (row % 4) * (fontSize + 3);
             boolean flip = x > right - 150;
             g.setTextAlign(flip ? TextAlignment.RIGHT : TextAlignment.LEFT);
@@ -479,6 +540,47 @@ public final class FrequencyPlot extends Region {
         }
         g.restore();
         drawLegend(g, right);
+        g.restore();
+    }
+
+    /**
+     * Draws what {@code strokeLine(x, top, x, bottom)} draws with the canvas's default square caps and the
+     * given width and dash pattern, as filled rectangles: the software pipeline fills an axis-aligned
+     * rectangle directly, while a stroke goes through the general anti-aliased rasteriser, which cost about
+     * a quarter of the render thread's time with the grid and the markers redrawn during a drag.
+     */
+    static void fillVerticalLine(GraphicsContext g, double x, double top, double bottom, double width,
+            double[] dash) {
+        double half = width / 2;
+        if (Arrays.stream(dash).sum() <= 0) {
+            g.fillRect(x - half, top - half, width, bottom - top + width);
+            return;
+        }
+        // the pattern alternates on and off across repeats, so an odd-length pattern swaps them each time;
+        // dashes whose caps meet across a short gap are filled as one rectangle, as a stroke's union would be
+        double y = top;
+        double runTop = Double.NaN;
+        double runBottom = Double.NaN;
+        for (int i = 0; y < bottom; i++) {
+            double length = dash[i % dash.length];
+            if (i % 2 == 0) {
+                double dashTop = y - half;
+                double dashBottom = Math.min(y + length, bottom) + half;
+                if (dashTop <= runBottom) {
+                    runBottom = dashBottom;
+                } else {
+                    if (runBottom > runTop) {
+                        g.fillRect(x - half, runTop, width, runBottom - runTop);
+                    }
+                    runTop = dashTop;
+                    runBottom = dashBottom;
+                }
+            }
+            y += length;
+        }
+        if (runBottom > runTop) {
+            g.fillRect(x - half, runTop, width, runBottom - runTop);
+        }
     }
 
     private void drawRegion(GraphicsContext g, PlotRegion region, double bottom, double right) {
@@ -576,8 +678,9 @@ public final class FrequencyPlot extends Region {
         g.setLineJoin(javafx.scene.shape.StrokeLineJoin.BEVEL);
         g.beginPath();
         boolean penDown = false;
-        double[] xs = s.x();
         double[] ys = s.y();
+        double[] xs = pixelColumn(s.x(), s.count(), horizontalMapping());
+        AxisMapping vertical = verticalMapping(right);
         boolean decimate = decimation && s.count() > 2 * plotWidth();
         if (!decimate) {
             for (int i = 0; i < s.count(); i++) {
@@ -586,8 +689,8 @@ public final class FrequencyPlot extends Region {
                     penDown = false;
                     continue;
                 }
-                double x = xOf(xs[i]);
-                double y = yOf(v, right);
+                double x = xs[i];
+                double y = vertical.pixel(v);
                 if (penDown) {
                     g.lineTo(x, y);
                 } else {
@@ -609,7 +712,7 @@ public final class FrequencyPlot extends Region {
         double columnX = 0;
         for (int i = 0; i <= s.count(); i++) {
             boolean valid = i < s.count() && Double.isFinite(ys[i]) && (scale == Scale.LOG ? ys[i] > 0 : true);
-            double x = valid ? xOf(xs[i]) : 0;
+            double x = valid ? xs[i] : 0;
             int c = valid ? (int) Math.floor(x) : Integer.MIN_VALUE;
             if (c != column && column != Integer.MIN_VALUE) {
                 // flush the finished column: first, extremes in their order, last; a column whose points all
@@ -643,7 +746,7 @@ public final class FrequencyPlot extends Region {
                 column = Integer.MIN_VALUE;
                 continue;
             }
-            double y = yOf(ys[i], right);
+            double y = vertical.pixel(ys[i]);
             if (c != column) {
                 column = c;
                 columnX = c + 0.5;

@@ -49,7 +49,7 @@ final class PathSimplifier {
             double endX = xs[buffered - 1];
             double endY = ys[buffered - 1];
             g.lineTo(endX, endY);
-                anchorX = endX;
+            anchorX = endX;
             anchorY = endY;
             buffered = 0;
         }
@@ -62,7 +62,7 @@ final class PathSimplifier {
     void flush() {
         if (buffered > 0) {
             g.lineTo(xs[buffered - 1], ys[buffered - 1]);
-                buffered = 0;
+            buffered = 0;
         }
     }
 

@@ -159,6 +159,67 @@ class FrequencyPlotTest {
         }
     }
 
+    /**
+     * Grid and marker lines are filled as rectangles (the software pipeline's fast path): they cover the same
+     * pixels as the canvas's own stroked line with its default square caps, solid, dashed, and with an odd
+     * dash pattern (whose on and off swap on each repeat), to within anti-aliasing rounding.
+     */
+    @Test
+    void filledLinesMatchStrokedLines(FxRobot robot) {
+        double[][] patterns = {{}, {6, 4}, {2, 3, 5}};
+        double[] widths = {1, 1.5, 3};
+        for (double[] dash : patterns) {
+            for (double width : widths) {
+                WritableImage[] images = new WritableImage[2];
+                robot.interact(() -> {
+                    for (int way = 0; way < 2; way++) {
+                        javafx.scene.canvas.Canvas canvas = new javafx.scene.canvas.Canvas(40, 200);
+                        javafx.scene.canvas.GraphicsContext g = canvas.getGraphicsContext2D();
+                        g.setFill(Color.WHITE);
+                        g.fillRect(0, 0, 40, 200);
+                        if (way == 0) {
+                            g.setStroke(Color.BLACK);
+                            g.setLineWidth(width);
+                            g.setLineDashes(dash);
+                            g.strokeLine(20.5, 10.25, 20.5, 187.5);
+                        } else {
+                            g.setFill(Color.BLACK);
+                            FrequencyPlot.fillVerticalLine(g, 20.5, 10.25, 187.5, width, dash);
+                        }
+                        images[way] = canvas.snapshot(null, null);
+                    }
+                });
+                double worst = 0;
+                for (int x = 0; x < 40; x++) {
+                    for (int y = 0; y < 200; y++) {
+                        double stroked = images[0].getPixelReader().getColor(x, y).getBrightness();
+                        double filled = images[1].getPixelReader().getColor(x, y).getBrightness();
+                        worst = Math.max(worst, Math.abs(stroked - filled));
+                    }
+                }
+                assertTrue(worst < 0.1, "dash " + java.util.Arrays.toString(dash) + ", width " + width
+                        + ": largest difference in brightness " + worst);
+            }
+        }
+    }
+
+    /** Axis ranges: kept while the data fit, headroom when a drag drifts out, tight for unrelated data. */
+    @Test
+    void axisRangesHoldStillDuringADrag() {
+        double[] current = {0.60, 0.70};
+        FrequencyPlot.Scale linear = FrequencyPlot.Scale.LINEAR;
+        assertTrue(FrequencyPlot.stable(current, new double[] {0.62, 0.69}, linear) == current, "inside: kept");
+        double[] drifted = FrequencyPlot.stable(current, new double[] {0.61, 0.71}, linear);
+        assertEquals(0.61, drifted[0], 1e-12, "the side the data did not leave by stays where the data are");
+        assertTrue(drifted[1] >= 0.71 + 0.2 * 0.10 - 1e-12, "a fifth of the span above: " + drifted[1]);
+        double[] unrelated = {5, 9};
+        assertTrue(FrequencyPlot.stable(current, unrelated, linear) == unrelated, "new data elsewhere: tight");
+        double[] logDrift = FrequencyPlot.stable(new double[] {1, 100}, new double[] {1.778, 177.8},
+                FrequencyPlot.Scale.LOG);
+        assertEquals(177.8 * Math.pow(10, 0.25), logDrift[1], 1e-9, "a quarter decade of headroom");
+        assertEquals(1.778, logDrift[0], 1e-12);
+    }
+
     @Test
     void frequencyAxisIsLogarithmic(FxRobot robot) {
         robot.interact(() -> plot.setFrequencyRange(1e3, 1e9));
