@@ -59,6 +59,30 @@ class ExplorerWindowTest extends WindowTestBase {
         assertEquals(2.95e-3, model.getDesign().geometry().value("outerDiameter"), 1e-15, "the drag is one undo step");
     }
 
+    /** The read-out refreshes at most ten times a second during a drag, and always ends on the final design. */
+    @Test
+    void aFastDragEndsWithTheFinalDesignInTheReadout(FxRobot robot) throws TimeoutException, InterruptedException {
+        settle();
+        double before = readoutZ0();
+        robot.interact(model::beginDrag);
+        for (int step = 1; step <= 20; step++) {
+            double outer = 2.95e-3 + step * 0.05e-3;
+            robot.interact(() -> model.drag(d -> d.withGeometryValue("outerDiameter", outer)));
+            Thread.sleep(10); // steps 10-20 ms apart, faster than the read-out refreshes
+        }
+        robot.interact(model::endDrag);
+        settle();
+        assertTrue(window.readout().isCurrent());
+        var snapshot = model.snapshotProperty().get();
+        assertEquals(3.95e-3, snapshot.design().geometry().value("outerDiameter"), 1e-15);
+        double midHz = Math.sqrt(snapshot.sweep().frequencyHz(0)
+                * snapshot.sweep().frequencyHz(snapshot.sweep().size() - 1));
+        double expected = snapshot.model().at(midHz).z0MagnitudeOhm();
+        assertEquals(org.linesweep.app.view.Display.number(expected) + " Ω",
+                window.readout().value("|Z0|").substring(0, window.readout().value("|Z0|").indexOf(" ∠")));
+        assertTrue(readoutZ0() > before, "a wider outer conductor, a higher Z0");
+    }
+
     @Test
     void markersAgreeWithTheCoreLimits(FxRobot robot) throws TimeoutException {
         settle();

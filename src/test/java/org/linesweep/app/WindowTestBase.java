@@ -88,5 +88,8 @@ abstract class WindowTestBase {
             return s != null && s.design().equals(model.getDesign());
         });
         WaitForAsyncUtils.waitForFxEvents();
+        // the read-out refreshes at most ten times a second: wait for its last refresh
+        WaitForAsyncUtils.waitFor(30, TimeUnit.SECONDS, () -> window.readout().isCurrent());
+        WaitForAsyncUtils.waitForFxEvents();
     }
 }
