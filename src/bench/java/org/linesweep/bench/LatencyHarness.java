@@ -22,6 +22,7 @@ import javafx.scene.control.Slider;
 import javafx.scene.layout.BorderPane;
 import javafx.scene.layout.GridPane;
 import javafx.stage.Stage;
+import org.linesweep.app.ExplorerLauncher;
 import org.linesweep.app.ExplorerWindow;
 import org.linesweep.app.FileDialogs;
 import org.linesweep.app.model.ExplorerModel;
@@ -81,6 +82,7 @@ public final class LatencyHarness extends Application {
     private ExecutorService worker;
 
     public static void main(String[] args) {
+        ExplorerLauncher.configureRendering(); // the explorer's own rendering settings, for both modes
         launch(LatencyHarness.class, args);
     }
 
