@@ -43,12 +43,14 @@ import org.linesweep.sweep.SweepResult;
  * pulse that sets it, the handling of the finished sweep when it arrives (a {@code runLater} from the sweep
  * thread) and the CSS and layout passes of the pulse that draws it (pre- to post-layout pulse listener);
  * (b) the time from setting the value to the end of the layout pass of the pulse that has drawn the result
- * of that step (or a newer one) on all four plots; and (c) the total latency, to the end of the render
- * thread's painting of that pulse's frame. For (c), a {@code runLater} posted from that pulse runs as soon as
- * the pulse ends, when the pulse's paint job is already queued on the render thread, and queues a job
- * behind it ({@code Toolkit.addRenderJob}, JavaFX's own internal hook: the render thread is a single-thread
- * queue, so the job runs when the frame has been painted and handed to the window); the job reads the clock.
- * The next step is set in the next pulse, as a drag would, without waiting for the paint.
+ * of that step (or a newer one) on all four plots; and (c) the total latency, until that pulse's frame has
+ * been painted and its pixels passed to the window system. For (c), a {@code runLater} posted from that
+ * pulse runs as soon as the pulse ends, when the pulse's paint job is already queued on the render thread,
+ * and queues a job behind it ({@code Toolkit.addRenderJob}, JavaFX's own internal hook: the render thread is
+ * a single-thread queue, so the job runs when the frame has been painted). In the software pipeline the
+ * painter then leaves the finished frame's pixels to the FX thread's event queue, which copies them to the
+ * window; so the job posts a {@code runLater} behind that copy, and that reads the clock. The next step is
+ * set in the next pulse, as a drag would, without waiting for the paint.
  *
  * <p>Mode {@code baseline} draws the same four quantities with the stock {@code LineChart} on a log
  * {@code ValueAxis}, animation and symbols off, fed the same snapshots.
@@ -181,13 +183,12 @@ public final class LatencyHarness extends Application {
         }
     }
 
-    /** Records when the frame of the pulse now ending has been painted (see the class comment). */
+    /** Records when the frame of the pulse now ending is on its way to the screen (see the class comment). */
     private void timePaint(long start) {
         paintsPending++;
         Platform.runLater(() -> Toolkit.getToolkit().addRenderJob(new RenderJob(() -> {
-            long painted = System.nanoTime();
             Platform.runLater(() -> {
-                totalTimes.add((painted - start) / 1e6);
+                totalTimes.add((System.nanoTime() - start) / 1e6);
                 paintsPending--;
             });
         })));
