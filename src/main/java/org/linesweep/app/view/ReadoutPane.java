@@ -35,10 +35,10 @@ public final class ReadoutPane extends VBox {
         "delay", "pair Zdiff / Zcommon", "pair Zodd / Zeven", "pair ε_eff odd / even"};
     /** Index of the first row that only a pair shows. */
     private static final int FIRST_PAIR_ROW = 14;
+    /** Shortest time between two refreshes while values keep changing. */
+    private static final long REFRESH_INTERVAL_NANOS = 100_000_000L;
     private final Label[] cells = new Label[NAMES.length];
     private final Label[] names = new Label[NAMES.length];
-    /** Shortest time between two refreshes while values keep changing. */
-    static final long REFRESH_INTERVAL_NANOS = 100_000_000L;
     private final PauseTransition trailingRefresh = new PauseTransition();
     private long lastRefreshNanos = Long.MIN_VALUE / 2;
     /** A refresh is waiting for its time (volatile: tests ask from their own thread). */
