@@ -1,7 +1,6 @@
 package org.linesweep.app.view;
 
 import java.util.ArrayList;
-import java.util.Arrays;
 import java.util.List;
 import java.util.function.DoubleConsumer;
 import javafx.geometry.VPos;
@@ -505,12 +504,10 @@ public final class FrequencyPlot extends Region {
         pixelColumnOf = null; // the axes may have moved since the last drawing
         double bottom = TOP + plotHeight();
         double right = LEFT + plotWidth();
+        // the layer covers the plot area exactly, so its bounds clip the curves; it sits at the area's corner,
+        // and is drawn in the plot's coordinates
         g.save();
-        g.translate(-LEFT, -TOP); // the layer sits at the plot area's corner; draw in the plot's coordinates
-        g.save();
-        g.beginPath();
-        g.rect(LEFT, TOP, plotWidth(), plotHeight());
-        g.clip();
+        g.translate(-LEFT, -TOP);
         for (PlotRegion region : regions) {
             drawRegion(g, region, bottom, right);
         }
@@ -538,7 +535,6 @@ public final class FrequencyPlot extends Region {
             g.fillText(marker.label(), flip ? x - 4 : x + 4, labelY);
             row++;
         }
-        g.restore();
         drawLegend(g, right);
         g.restore();
     }
@@ -552,7 +548,11 @@ public final class FrequencyPlot extends Region {
     static void fillVerticalLine(GraphicsContext g, double x, double top, double bottom, double width,
             double[] dash) {
         double half = width / 2;
-        if (Arrays.stream(dash).sum() <= 0) {
+        double period = 0;
+        for (double length : dash) {
+            period += length;
+        }
+        if (!(period > 0)) {
             g.fillRect(x - half, top - half, width, bottom - top + width);
             return;
         }
