@@ -528,7 +528,7 @@ public final class FrequencyPlot extends Region {
             }
             double x = Math.round(xOf(marker.frequencyHz())) + 0.5;
             g.setFill(marker.color());
-            fillVerticalLine(g, x, TOP, bottom, 1.5 * lineScale, marker.dash());
+            fillVerticalLine(g, x, TOP, bottom, 1.5 * lineScale, scaled(marker.dash()));
             double labelY = TOP + 16 + (row % 4) * (fontSize + 3);
             boolean flip = x > right - 150;
             g.setTextAlign(flip ? TextAlignment.RIGHT : TextAlignment.LEFT);
@@ -537,6 +537,21 @@ public final class FrequencyPlot extends Region {
         }
         drawLegend(g, right);
         g.restore();
+    }
+
+    /**
+     * A dash pattern for lines {@link #lineScale} times as wide: the dashes and gaps grow with the width, or the
+     * square caps of thick lines would close the gaps and a dashed curve would read as solid (meeting mode).
+     */
+    private double[] scaled(double[] dash) {
+        if (lineScale == 1 || dash.length == 0) {
+            return dash;
+        }
+        double[] out = new double[dash.length];
+        for (int i = 0; i < dash.length; i++) {
+            out[i] = dash[i] * lineScale;
+        }
+        return out;
     }
 
     /**
@@ -672,7 +687,7 @@ public final class FrequencyPlot extends Region {
         Scale scale = right ? rightScale : yScale;
         g.setStroke(s.color());
         g.setLineWidth(s.width() * lineScale);
-        g.setLineDashes(s.dash());
+        g.setLineDashes(scaled(s.dash()));
         // bevel joins: a miter at a sharp turn would spike past the data, and round joins cost the
         // software rasteriser far more
         g.setLineJoin(javafx.scene.shape.StrokeLineJoin.BEVEL);
@@ -798,7 +813,7 @@ public final class FrequencyPlot extends Region {
             double rowY = y + 2 + rowHeight * (i + 0.5);
             g.setStroke(s.color());
             g.setLineWidth(s.width() * lineScale);
-            g.setLineDashes(s.dash());
+            g.setLineDashes(scaled(s.dash()));
             g.strokeLine(x + 4, rowY, x + 28, rowY);
             g.setLineDashes();
             g.setFill(ink);

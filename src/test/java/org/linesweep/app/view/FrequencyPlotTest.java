@@ -230,6 +230,40 @@ class FrequencyPlotTest {
         assertEquals(1e6, plot.frequencyAt((left + right) / 2), 1e-3);
     }
 
+    /**
+     * With thick lines (meeting mode's scale) a dashed curve still shows gaps: the dash pattern grows with the
+     * width, or the square caps would close the gaps of the shorter patterns.
+     */
+    @Test
+    void dashedCurvesKeepTheirGapsWhenLinesAreThick(FxRobot robot) {
+        int points = 400;
+        double[] x = new double[points];
+        double[] y = new double[points];
+        for (int i = 0; i < points; i++) {
+            x[i] = Math.pow(10, 3 + 7.0 * i / (points - 1));
+            y[i] = 0.5;
+        }
+        for (double[] dash : new double[][] {{8, 4}, {2, 3}}) {
+            WritableImage[] image = new WritableImage[1];
+            robot.interact(() -> {
+                plot.setLook(1.9, 17, Color.BLACK, Color.LIGHTGRAY, Color.WHITE);
+                plot.setFrequencyRange(1e3, 1e10);
+                plot.setLeftAxis("", FrequencyPlot.Scale.LINEAR);
+                plot.setSeries(List.of(new PlotSeries("", x, y, points, Color.rgb(230, 20, 20), 2.0, dash, false)));
+            });
+            WaitForAsyncUtils.waitForFxEvents();
+            robot.interact(() -> image[0] = plot.snapshot(1));
+            int[][] columns = extents(image[0]);
+            int gaps = 0;
+            for (int c = columns()[0] + 1; c < columns()[1]; c++) {
+                if (columns[c][0] < 0 && columns[c - 1][0] >= 0) {
+                    gaps++;
+                }
+            }
+            assertTrue(gaps >= 10, "dash " + java.util.Arrays.toString(dash) + ": " + gaps + " gaps along the curve");
+        }
+    }
+
     @Test
     void snapshotAtTwiceTheScale(FxRobot robot) {
         robot.interact(() -> plot.setSeries(List.of(curve(500, 1.0, 3, Color.BLUE))));
