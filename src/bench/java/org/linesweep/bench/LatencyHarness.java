@@ -107,7 +107,7 @@ public final class LatencyHarness extends Application {
             if (waiting) {
                 fxThisStep += (System.nanoTime() - t0) / 1e6;
             }
-        }));
+        }), Platform::isFxApplicationThread, ExplorerModel.INLINE_BUDGET_NANOS);
         ExplorerWindow window = new ExplorerWindow(model, new NoDialogs(),
                 Preferences.userRoot().node("org/linesweep/bench-latency"));
         Parent root = window.root();

@@ -64,7 +64,7 @@ abstract class WindowTestBase {
         Thread.setDefaultUncaughtExceptionHandler((t, e) -> uncaught.add(e));
         Thread.currentThread().setUncaughtExceptionHandler((t, e) -> uncaught.add(e));
         worker = Executors.newSingleThreadExecutor();
-        model = new ExplorerModel(initialDesign(), worker, Platform::runLater);
+        model = ExplorerModel.forFxThread(initialDesign(), worker);
         window = new ExplorerWindow(model, dialogs, Preferences.userRoot().node("org/linesweep/test-" + System.nanoTime()));
         stage.setScene(new Scene(window.root(), 1400, 900));
         window.attach(stage);

@@ -8,10 +8,13 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.concurrent.Executor;
+import java.util.function.BooleanSupplier;
 import org.junit.jupiter.api.Test;
 import org.linesweep.design.Design;
+import org.linesweep.design.SweepSettings;
 import org.linesweep.io.Presets;
 import org.linesweep.physics.LimitFinder;
+import org.linesweep.sweep.GridScale;
 
 /** The observable model without the toolkit: changes, undo, drags, rejections, pins, the threading seam. */
 class ExplorerModelTest {
@@ -130,5 +133,56 @@ class ExplorerModelTest {
         results.get(0).run();
         assertEquals(1, delivered.size());
         assertEquals(2.0, delivered.get(0).design().lengthMetres());
+    }
+
+    /**
+     * On the result thread, a design of a kind already computed within the budget is computed in place and
+     * delivered before the request returns (drawn in the same frame); a kind not yet measured goes to the worker.
+     */
+    @Test
+    void cheapChangesOnTheResultThreadAreComputedInPlace() {
+        List<Runnable> jobs = new ArrayList<>();
+        List<SweepSnapshot> delivered = new ArrayList<>();
+        SweepService service = new SweepService(jobs::add, NOW, delivered::add, e -> { }, () -> true,
+                Long.MAX_VALUE);
+        Design base = Presets.load("bench-patch-lead");
+        service.request(base);
+        assertEquals(1, jobs.size(), "the first design of its kind has no measured cost: the worker computes it");
+        assertTrue(delivered.isEmpty());
+        jobs.remove(0).run();
+        assertEquals(1, delivered.size());
+
+        Design wider = base.withGeometryValue("outerDiameter", 3.2e-3);
+        service.request(wider);
+        assertTrue(jobs.isEmpty(), "no worker job for a change computed in place");
+        assertEquals(List.of(base, wider), delivered.stream().map(SweepSnapshot::design).toList());
+
+        Design finer = wider.withSweep(new SweepSettings(1e4, 2e10, 3000, GridScale.LOG));
+        service.request(finer);
+        assertEquals(1, jobs.size(), "another point count is another kind of cost: to the worker");
+        Design longer = wider.withLength(2.0);
+        service.request(longer);
+        assertEquals(longer, delivered.get(2).design(), "the measured kind is computed in place again");
+        jobs.remove(0).run();
+        assertEquals(3, delivered.size(), "the superseded worker request is neither computed nor delivered");
+    }
+
+    /** Off the result thread, with no budget, or after a computation over the budget, the worker computes. */
+    @Test
+    void otherwiseTheWorkerComputes() {
+        assertTrue(secondRequestGoesToTheWorker(() -> false, Long.MAX_VALUE), "off the result thread");
+        assertTrue(secondRequestGoesToTheWorker(() -> true, SweepService.NEVER_INLINE), "no budget");
+        assertTrue(secondRequestGoesToTheWorker(() -> true, 0), "over the budget");
+        assertFalse(secondRequestGoesToTheWorker(() -> true, Long.MAX_VALUE), "the control case");
+    }
+
+    private static boolean secondRequestGoesToTheWorker(BooleanSupplier onResultThread, long budgetNanos) {
+        List<Runnable> jobs = new ArrayList<>();
+        SweepService service = new SweepService(jobs::add, NOW, s -> { }, e -> { }, onResultThread, budgetNanos);
+        Design base = Presets.load("bench-patch-lead");
+        service.request(base);
+        jobs.remove(0).run();
+        service.request(base.withLength(2.0));
+        return !jobs.isEmpty();
     }
 }
