@@ -13,7 +13,7 @@ import org.openjdk.jmh.runner.options.OptionsBuilder;
 /**
  * Runs the JMH benchmarks and prints one summary line per line type:
  * {@code RESULT sweep type=coax points=2000 ns_per_point=… floor_ns_per_point=… ratio=…}, then the limits
- * and design-change figures. Arguments are passed to JMH's options as a regex filter when given.
+ * design-change and drag-step figures. Arguments are passed to JMH's options as a regex filter when given.
  */
 public final class BenchReport {
 
@@ -29,6 +29,7 @@ public final class BenchReport {
         Map<String, Double> floor = new HashMap<>();
         Map<String, Double> limits = new HashMap<>();
         Map<String, Double> change = new HashMap<>();
+        Map<String, Double> drag = new HashMap<>();
         Map<String, Double> tolerance = new HashMap<>();
         Map<String, Double> waveform = new HashMap<>();
         for (RunResult result : results) {
@@ -41,6 +42,7 @@ public final class BenchReport {
                 case "floor" -> floor.put(type, score);
                 case "limits" -> limits.put(type, score);
                 case "designChange" -> change.put(type, score);
+                case "dragStep" -> drag.put(type, score);
                 case "tolerance" -> tolerance.put(type, score); // milliseconds
                 case "waveform" -> waveform.put(type, score);
                 default -> { }
@@ -66,6 +68,10 @@ public final class BenchReport {
         for (String type : change.keySet()) {
             System.out.printf(Locale.ROOT, "RESULT design-change type=%s points=%d ms=%.3f%n",
                     type.toLowerCase(Locale.ROOT).replace('_', '-'), SweepBenchmark.POINTS, change.get(type) / 1000);
+        }
+        for (String type : drag.keySet()) {
+            System.out.printf(Locale.ROOT, "RESULT drag-step type=%s points=%d ms=%.3f%n",
+                    type.toLowerCase(Locale.ROOT).replace('_', '-'), SweepBenchmark.POINTS, drag.get(type) / 1000);
         }
         for (String type : tolerance.keySet()) {
             System.out.printf(Locale.ROOT, "RESULT tolerance type=%s samples=%d ms=%.1f%n",

@@ -53,6 +53,7 @@ public class SweepBenchmark {
     private double[] c;
     private final double[] solution = new double[Telegrapher.SIZE];
     private int toggle;
+    private int dragCount;
 
     @Setup
     public void setUp() {
@@ -107,6 +108,24 @@ public class SweepBenchmark {
         toggle ^= 1;
         String field = design.geometry().valuesMetres().keySet().iterator().next();
         Design changed = design.withGeometryValue(field, design.geometry().value(field) * (toggle == 0 ? 1.001 : 0.999));
+        LineModel changedModel = changed.toModel();
+        engine.run(changedModel, frequencies, POINTS, changed.lengthMetres(), reuse);
+        return LimitFinder.find(changedModel, changed.lengthMetres(), changed.threshold(), changed.lossBudgetDb());
+    }
+
+    /**
+     * One step of a drag as the explorer computes it (model, 2,000-point sweep, limits): each call moves one
+     * geometry field, the fields in turn, to a value no earlier call used, so no table kept for an earlier value
+     * (a tube's c/b, a mode cutoff) can serve, as in a real drag. {@link #designChange} alternates between two
+     * values, which the kept tables do serve.
+     */
+    @Benchmark
+    public FrequencyLimits dragStep() {
+        dragCount++;
+        String[] fields = design.geometry().valuesMetres().keySet().toArray(String[]::new);
+        String field = fields[dragCount % fields.length];
+        double factor = 1.0 + 0.05 * (dragCount % 100_000) / 100_000.0;
+        Design changed = design.withGeometryValue(field, design.geometry().value(field) * factor);
         LineModel changedModel = changed.toModel();
         engine.run(changedModel, frequencies, POINTS, changed.lengthMetres(), reuse);
         return LimitFinder.find(changedModel, changed.lengthMetres(), changed.threshold(), changed.lossBudgetDb());

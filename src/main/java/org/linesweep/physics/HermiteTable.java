@@ -153,13 +153,18 @@ final class HermiteTable {
      */
     static HermiteTable of(java.util.function.DoubleFunction<Complex[]> exact, double xMin, double xMax,
             int nodesPerUnitLog) {
-        return new HermiteTable((x, out) -> {
+        return new HermiteTable(source(exact), xMin, xMax, nodesPerUnitLog);
+    }
+
+    /** A function given as {F(x), F′(x)}, as a source. */
+    static Source source(java.util.function.DoubleFunction<Complex[]> exact) {
+        return (x, out) -> {
             Complex[] valueAndSlope = exact.apply(x);
             out[0] = valueAndSlope[0].getReal();
             out[1] = valueAndSlope[0].getImaginary();
             out[2] = valueAndSlope[1].getReal();
             out[3] = valueAndSlope[1].getImaginary();
-        }, xMin, xMax, nodesPerUnitLog);
+        };
     }
 
     /** {F(x), F′(x)} at a {@linkplain #covers covered} x, as complex numbers. */

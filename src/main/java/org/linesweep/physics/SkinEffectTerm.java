@@ -92,9 +92,9 @@ final class SkinEffectTerm {
 
     /**
      * For a tube: tabulates its thin-wall Z/R_dc (b/δ below 20 skin depths of wall) over the sweep's range when
-     * the sweep has at least {@link HermiteTable#POINTS_PER_NODE} points there per table node (a node costs one exact
-     * evaluation, four complex Bessel functions), reusing a recent table of the same c/b when it covers the
-     * range. Other shapes read shared tables and need nothing.
+     * that costs fewer exact evaluations (four complex Bessel functions each) than the sweep's points there
+     * (see {@link ChebyshevSampler#pays}), reusing a recent table of the same c/b when it covers the range.
+     * Other shapes read shared tables and need nothing.
      */
     void prepareForSweep(double[] frequenciesHz, int count) {
         if (shape != Shape.TUBE) {
@@ -116,7 +116,7 @@ final class SkinEffectTerm {
         if (inside < 2 || !(high > low) || (existing != null && existing.covers(low) && existing.covers(high))) {
             return;
         }
-        if (HermiteTable.pays(low, high, InternalImpedance.TUBE_TABLE_NODES_PER_UNIT_LOG, inside)) {
+        if (ChebyshevSampler.pays(low, high, InternalImpedance.TUBE_TABLE_NODES_PER_UNIT_LOG, inside)) {
             tubeTable = InternalImpedance.sharedTubeTable(kappa, low, high);
         }
     }

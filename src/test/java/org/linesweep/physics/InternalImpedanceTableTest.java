@@ -18,8 +18,9 @@ class InternalImpedanceTableTest {
 
     static final double VALUE_TOLERANCE = 1e-10;
     static final double SLOPE_TOLERANCE = 1e-7;
-    /** Tube tables have half the wire table's node density (each node costs four Bessel functions): measured
-     *  2.4e-10 and 9.5e-8 at every c/b tried, held to twice that. */
+    /** Tube tables have half the wire table's node density (each node costs four Bessel functions; they are read
+     *  from Chebyshev samples, see ChebyshevSamplerTest): measured 2.4e-10 and 9.5e-8 at every c/b tried, held to
+     *  twice that. */
     static final double TUBE_VALUE_TOLERANCE = 5e-10;
     static final double TUBE_SLOPE_TOLERANCE = 2e-7;
 
