@@ -221,6 +221,10 @@ public final class LatencyHarness extends Application {
                 percentile(fxTimes, 95), percentile(layoutTimes, 50), percentile(layoutTimes, 95),
                 percentile(totalTimes, 50), percentile(totalTimes, 95), heapMb,
                 Runtime.getRuntime().maxMemory() / 1048576.0, finalShown);
+        if (System.getProperty("harness.totals") != null) {
+            System.out.println("TOTALS " + totalTimes.stream().map(t -> String.format(Locale.ROOT, "%.1f", t)).toList());
+            System.out.println("FX " + fxTimes.stream().map(t -> String.format(Locale.ROOT, "%.1f", t)).toList());
+        }
         worker.shutdownNow();
         Platform.exit();
     }
