@@ -1,5 +1,8 @@
 package org.linesweep;
 
+import static com.tngtech.archunit.base.DescribedPredicate.not;
+import static com.tngtech.archunit.core.domain.JavaClass.Predicates.resideInAPackage;
+import static com.tngtech.archunit.core.domain.JavaClass.Predicates.resideInAnyPackage;
 import static com.tngtech.archunit.lang.syntax.ArchRuleDefinition.noClasses;
 
 import com.tngtech.archunit.core.domain.JavaClasses;
@@ -17,6 +20,15 @@ class ArchitectureTest {
     void onlyTheAppImportsJavaFx() {
         noClasses().that().resideOutsideOfPackage("org.linesweep.app..")
                 .should().dependOnClassesThat().resideInAnyPackage("javafx..")
+                .check(CLASSES);
+    }
+
+    /** The observable model uses JavaFX's properties and collections, not the toolkit: its tests need no FX thread. */
+    @Test
+    void theObservableModelUsesOnlyJavaFxBeansAndCollections() {
+        noClasses().that().resideInAPackage("org.linesweep.app.model..")
+                .should().dependOnClassesThat(resideInAPackage("javafx..")
+                        .and(not(resideInAnyPackage("javafx.beans..", "javafx.collections.."))))
                 .check(CLASSES);
     }
 

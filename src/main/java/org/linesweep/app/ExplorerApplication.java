@@ -37,7 +37,7 @@ public final class ExplorerApplication extends Application {
                 problem = "Could not open " + raw.get(1) + ": " + e.getMessage() + ". Showing the default design.";
             }
         }
-        ExplorerModel model = ExplorerModel.forFxThread(initial, worker);
+        ExplorerModel model = ExplorerLauncher.newModel(initial, worker);
         if (problem != null) {
             model.report(problem);
         }

@@ -1,8 +1,15 @@
 package org.linesweep.app;
 
+import java.util.concurrent.Executor;
 import javafx.application.Application;
+import javafx.application.Platform;
+import org.linesweep.app.model.ExplorerModel;
+import org.linesweep.design.Design;
 
-/** Starts the JavaFX explorer; separate from the Application class so the jar runs from the class path. */
+/**
+ * Starts the JavaFX explorer, and sets up what the window and the latency harness share; separate from the
+ * Application class so the jar runs from the class path.
+ */
 public final class ExplorerLauncher {
 
     private ExplorerLauncher() {
@@ -11,6 +18,17 @@ public final class ExplorerLauncher {
     public static void launch(String[] args) {
         configureRendering();
         Application.launch(ExplorerApplication.class, args);
+    }
+
+    /**
+     * The explorer's model as the window uses it: results delivered on the FX thread, and a change made there
+     * computed in place when cheap (within {@link ExplorerModel#INLINE_BUDGET_NANOS}).
+     *
+     * @param worker where the other sweeps are computed (a background thread)
+     */
+    public static ExplorerModel newModel(Design initial, Executor worker) {
+        return new ExplorerModel(initial, worker, Platform::runLater, Platform::isFxApplicationThread,
+                ExplorerModel.INLINE_BUDGET_NANOS);
     }
 
     /**

@@ -9,7 +9,6 @@ import java.util.concurrent.Executors;
 import java.util.concurrent.TimeUnit;
 import java.util.concurrent.TimeoutException;
 import java.util.prefs.Preferences;
-import javafx.application.Platform;
 import javafx.scene.Scene;
 import javafx.stage.Stage;
 import org.junit.jupiter.api.AfterEach;
@@ -64,7 +63,7 @@ abstract class WindowTestBase {
         Thread.setDefaultUncaughtExceptionHandler((t, e) -> uncaught.add(e));
         Thread.currentThread().setUncaughtExceptionHandler((t, e) -> uncaught.add(e));
         worker = Executors.newSingleThreadExecutor();
-        model = ExplorerModel.forFxThread(initialDesign(), worker);
+        model = ExplorerLauncher.newModel(initialDesign(), worker);
         window = new ExplorerWindow(model, dialogs, Preferences.userRoot().node("org/linesweep/test-" + System.nanoTime()));
         stage.setScene(new Scene(window.root(), 1400, 900));
         window.attach(stage);

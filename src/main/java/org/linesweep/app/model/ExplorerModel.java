@@ -2,7 +2,6 @@ package org.linesweep.app.model;
 
 import java.util.concurrent.Executor;
 import java.util.function.BooleanSupplier;
-import javafx.application.Platform;
 import javafx.beans.property.BooleanProperty;
 import javafx.beans.property.DoubleProperty;
 import javafx.beans.property.ObjectProperty;
@@ -46,22 +45,11 @@ public final class ExplorerModel {
     private int pinCounter;
 
     /**
-     * A change whose kind of design last computed within this time is computed on the FX thread itself, so its
-     * curves are drawn in the same frame (see {@link SweepService}). 2 ms is an eighth of a 60 Hz frame: a
-     * 2,000-point design change takes 0.1-0.4 ms here, and a heavier one goes to the worker.
+     * A change whose kind of design last computed within this much CPU time is computed on the FX thread itself,
+     * so its curves are drawn in the same frame (see {@link SweepService}). 2 ms is an eighth of a 60 Hz frame:
+     * a 2,000-point drag step takes 0.1-0.4 ms here (docs/performance.md), and a heavier one goes to the worker.
      */
     public static final long INLINE_BUDGET_NANOS = 2_000_000;
-
-    /**
-     * The app's model: results delivered on the FX thread, and changes made there computed in place when
-     * cheap (within {@link #INLINE_BUDGET_NANOS}).
-     *
-     * @param worker where the other sweeps are computed (a background thread)
-     */
-    public static ExplorerModel forFxThread(Design initial, Executor worker) {
-        return new ExplorerModel(initial, worker, Platform::runLater, Platform::isFxApplicationThread,
-                INLINE_BUDGET_NANOS);
-    }
 
     /**
      * A model that computes every change on the worker.
