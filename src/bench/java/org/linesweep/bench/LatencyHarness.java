@@ -56,8 +56,9 @@ import org.linesweep.sweep.SweepResult;
  * {@code ValueAxis}, animation and symbols off, fed the same snapshots.
  *
  * <p>Arguments: mode (explorer|baseline), points. Prints
- * {@code LATENCY mode=… points=… fx_p50_ms=… layout_p50_ms=… total_p50_ms=… total_p95_ms=… heap_mb=…
- * final_on_screen=…}.
+ * {@code LATENCY mode=… points=… fx_p50_ms=… layout_p50_ms=… paint_p50_ms=… total_p50_ms=… total_p95_ms=…
+ * heap_mb=… final_on_screen=…}; paint is from the end of the pulse that drew a step to the end of its frame's
+ * paint (the render thread's work for the frame, plus any wait for the frame before it).
  */
 public final class LatencyHarness extends Application {
 
@@ -67,6 +68,8 @@ public final class LatencyHarness extends Application {
     private final List<Double> fxTimes = new ArrayList<>();
     private final List<Double> layoutTimes = new ArrayList<>();
     private final List<Double> totalTimes = new ArrayList<>();
+    /** From the end of the pulse that drew a step to the end of its frame's paint on the render thread. */
+    private final List<Double> paintTimes = new ArrayList<>();
     /** Measured steps whose frame the render thread has not reported painted yet. */
     private int paintsPending;
     private ExplorerModel model;
@@ -186,12 +189,17 @@ public final class LatencyHarness extends Application {
     /** Records when the frame of the pulse now ending is on its way to the screen (see the class comment). */
     private void timePaint(long start) {
         paintsPending++;
-        Platform.runLater(() -> Toolkit.getToolkit().addRenderJob(new RenderJob(() -> {
-            Platform.runLater(() -> {
-                totalTimes.add((System.nanoTime() - start) / 1e6);
-                paintsPending--;
-            });
-        })));
+        Platform.runLater(() -> {
+            long pulseEnd = System.nanoTime();
+            Toolkit.getToolkit().addRenderJob(new RenderJob(() -> {
+                long painted = System.nanoTime();
+                Platform.runLater(() -> {
+                    paintTimes.add((painted - pulseEnd) / 1e6);
+                    totalTimes.add((System.nanoTime() - start) / 1e6);
+                    paintsPending--;
+                });
+            }));
+        });
     }
 
     private boolean allRedrawn() {
@@ -215,11 +223,11 @@ public final class LatencyHarness extends Application {
         double heapMb = (ManagementFactory.getMemoryMXBean().getHeapMemoryUsage().getUsed()) / 1048576.0;
         System.out.printf(Locale.ROOT,
                 "LATENCY mode=%s points=%d plots=4 steps=%d fx_p50_ms=%.2f fx_p95_ms=%.2f layout_p50_ms=%.2f"
-                        + " layout_p95_ms=%.2f total_p50_ms=%.2f total_p95_ms=%.2f heap_after_gc_mb=%.1f"
+                        + " layout_p95_ms=%.2f paint_p50_ms=%.2f total_p50_ms=%.2f total_p95_ms=%.2f heap_after_gc_mb=%.1f"
                         + " max_heap_mb=%.0f final_on_screen=%s%n",
                 baseline ? "baseline" : "explorer", points, fxTimes.size(), percentile(fxTimes, 50),
                 percentile(fxTimes, 95), percentile(layoutTimes, 50), percentile(layoutTimes, 95),
-                percentile(totalTimes, 50), percentile(totalTimes, 95), heapMb,
+                percentile(paintTimes, 50), percentile(totalTimes, 50), percentile(totalTimes, 95), heapMb,
                 Runtime.getRuntime().maxMemory() / 1048576.0, finalShown);
         if (System.getProperty("harness.totals") != null) {
             System.out.println("TOTALS " + totalTimes.stream().map(t -> String.format(Locale.ROOT, "%.1f", t)).toList());

@@ -36,12 +36,24 @@ public final class ExplorerLauncher {
      * background (panel fills, frames, control shapes) as an image and draws it stretched; in the software
      * pipeline (no usable GPU: many virtual machines, remote desktops, screen-sharing sessions) drawing that
      * image costs far more than filling the rectangle, and it is drawn under every changed area, so it took
-     * over half the time to paint a frame of a drag. Drawing backgrounds directly halved that paint time
-     * (docs/performance.md). A value given on the command line wins.
+     * over half the time to paint a frame of a drag. Drawing backgrounds directly halved that paint time.
+     *
+     * <p>JavaFX repaints a frame's changed areas as at most six rectangles by default, merging the closest when
+     * there are more. A drag step changes seven to ten (four plot areas, the slider, its field, the
+     * cross-section, the read-out), so a plot area was merged with a piece of the design panel into one
+     * rectangle that only the window itself covers, and everything under it was painted. With up to fifteen
+     * (JavaFX's maximum) each plot area is painted from its own frame, and the window's and the design panel's
+     * backgrounds are not painted again under the plots (docs/performance.md has the measurements). A value
+     * given on the command line wins.
      */
     public static void configureRendering() {
-        if (System.getProperty("prism.disableRegionCaching") == null) {
-            System.setProperty("prism.disableRegionCaching", "true");
+        setUnlessGiven("prism.disableRegionCaching", "true");
+        setUnlessGiven("prism.dirtyregioncount", "15");
+    }
+
+    private static void setUnlessGiven(String key, String value) {
+        if (System.getProperty(key) == null) {
+            System.setProperty(key, value);
         }
     }
 }
