@@ -26,6 +26,7 @@ import org.linesweep.app.ExplorerLauncher;
 import org.linesweep.app.ExplorerWindow;
 import org.linesweep.app.FileDialogs;
 import org.linesweep.app.model.ExplorerModel;
+import org.linesweep.app.model.SweepService;
 import org.linesweep.app.model.SweepSnapshot;
 import org.linesweep.app.view.FrequencyPlot;
 import org.linesweep.design.Design;
@@ -85,6 +86,10 @@ public final class LatencyHarness extends Application {
     private List<LineChart<Number, Number>> charts;
     private long lastBaselineShown = -1;
     private ExecutorService worker;
+    /** -Dharness.free=true: a new value at every pulse without waiting for the last to be drawn. */
+    private final boolean free = Boolean.getBoolean("harness.free");
+    private final List<OpenStep> openSteps = new ArrayList<>();
+    private int freeIdle;
 
     public static void main(String[] args) {
         ExplorerLauncher.configureRendering(); // the explorer's own rendering settings, for both modes
@@ -110,7 +115,9 @@ public final class LatencyHarness extends Application {
             if (waiting) {
                 fxThisStep += (System.nanoTime() - t0) / 1e6;
             }
-        }), Platform::isFxApplicationThread, ExplorerModel.INLINE_BUDGET_NANOS);
+        }), Platform::isFxApplicationThread,
+                Boolean.parseBoolean(System.getProperty("harness.inline", "true"))
+                        ? ExplorerModel.INLINE_BUDGET_NANOS : SweepService.NEVER_INLINE);
         ExplorerWindow window = new ExplorerWindow(model, new NoDialogs(),
                 Preferences.userRoot().node("org/linesweep/bench-latency"));
         Parent root = window.root();
@@ -129,6 +136,10 @@ public final class LatencyHarness extends Application {
 
             @Override
             public void handle(long now) {
+                if (free) {
+                    freeStep(slider, points, this);
+                    return;
+                }
                 if (waiting) {
                     return;
                 }
@@ -159,8 +170,56 @@ public final class LatencyHarness extends Application {
         }.start();
     }
 
+    /** Free-running drag: a new value at every pulse, whether or not the last one has been drawn yet. */
+    private void freeStep(Slider slider, int points, AnimationTimer timer) {
+        if (step == 0 && freeIdle++ < 30) {
+            return;
+        }
+        if (step >= WARM_UP + MEASURED) {
+            timer.stop();
+            finish(points, slider);
+            return;
+        }
+        slider.setValueChanging(true);
+        long t0 = System.nanoTime();
+        double before = model.getDesign().geometry().value("outerDiameter");
+        slider.setValue(500 + 250 * Math.sin(step * 0.05 + 0.3));
+        Design stepDesign = model.getDesign();
+        if (stepDesign.geometry().value("outerDiameter") != before && step >= WARM_UP) {
+            openSteps.add(new OpenStep(stepDesign, t0));
+        }
+        step++;
+    }
+
+    /** A free-running step not yet on screen: its design and when it was set. */
+    private record OpenStep(Design design, long start) {
+    }
+
+    /** In free-running mode: every open step up to the one now shown counts as shown (a newer value is). */
+    private void afterFreeLayout(long end) {
+        SweepSnapshot shown = model.snapshotProperty().get();
+        if (shown == null) {
+            return;
+        }
+        int index = -1;
+        for (int i = 0; i < openSteps.size(); i++) {
+            if (openSteps.get(i).design().equals(shown.design())) {
+                index = i;
+            }
+        }
+        for (int i = 0; i <= index; i++) {
+            OpenStep done = openSteps.remove(0);
+            layoutTimes.add((end - done.start()) / 1e6);
+            timePaint(done.start());
+        }
+    }
+
     private void afterLayout() {
         long end = System.nanoTime();
+        if (free) {
+            afterFreeLayout(end);
+            return;
+        }
         if (!waiting) {
             return;
         }
@@ -225,7 +284,8 @@ public final class LatencyHarness extends Application {
                 "LATENCY mode=%s points=%d plots=4 steps=%d fx_p50_ms=%.2f fx_p95_ms=%.2f layout_p50_ms=%.2f"
                         + " layout_p95_ms=%.2f paint_p50_ms=%.2f total_p50_ms=%.2f total_p95_ms=%.2f heap_after_gc_mb=%.1f"
                         + " max_heap_mb=%.0f final_on_screen=%s%n",
-                baseline ? "baseline" : "explorer", points, fxTimes.size(), percentile(fxTimes, 50),
+                (baseline ? "baseline" : "explorer") + (free ? "-free" : ""), points,
+                free ? totalTimes.size() : fxTimes.size(), percentile(fxTimes, 50),
                 percentile(fxTimes, 95), percentile(layoutTimes, 50), percentile(layoutTimes, 95),
                 percentile(paintTimes, 50), percentile(totalTimes, 50), percentile(totalTimes, 95), heapMb,
                 Runtime.getRuntime().maxMemory() / 1048576.0, finalShown);
