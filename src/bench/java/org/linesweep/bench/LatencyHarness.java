@@ -53,6 +53,11 @@ import org.linesweep.sweep.SweepResult;
  * window; so the job posts a {@code runLater} behind that copy, and that reads the clock. The next step is
  * set in the next pulse, as a drag would, without waiting for the paint.
  *
+ * <p>System properties: {@code harness.free=true} sets a new value at every pulse without waiting for the last
+ * one to be drawn (a step counts as shown with the first frame that shows it or a newer value; no FX time is
+ * taken); {@code harness.inline=false} makes the model send every step to the worker thread; {@code
+ * harness.totals=true} prints every step's figures.
+ *
  * <p>Mode {@code baseline} draws the same four quantities with the stock {@code LineChart} on a log
  * {@code ValueAxis}, animation and symbols off, fed the same snapshots.
  *
