@@ -36,9 +36,8 @@ public final class CoaxModes {
         // bracket first, which saves the scan's integrations (a drag of either diameter solves this at every step)
         double usualLow = 0.99 * estimate;
         double usualHigh = 1.04 * estimate;
-        double usualSlopeLow = endSlope(usualLow, radiusRatio);
-        if (usualSlopeLow > 0 && endSlope(usualHigh, radiusRatio) < 0) {
-            return new BrentSolver(1e-15, 1e-14).solve(200, x -> endSlope(x, radiusRatio), usualLow, usualHigh);
+        if (endSlope(usualLow, radiusRatio) > 0 && endSlope(usualHigh, radiusRatio) < 0) {
+            return rootBetween(usualLow, usualHigh, radiusRatio);
         }
         // the root lies within 10 % of the estimate for b/a up to 10^4 (it is 2-3 % above it for common
         // lines, 8 % below it as b/a grows without bound); start just below and check the sign says so
@@ -59,8 +58,12 @@ public final class CoaxModes {
             low = high;
             slopeLow = slopeHigh;
         }
-        BrentSolver solver = new BrentSolver(1e-15, 1e-14);
-        return solver.solve(200, x -> endSlope(x, radiusRatio), low, high);
+        return rootBetween(low, high, radiusRatio);
+    }
+
+    /** The root of the end slope in [low, high], where it changes sign, by Brent's method. */
+    private static double rootBetween(double low, double high, double radiusRatio) {
+        return new BrentSolver(1e-15, 1e-14).solve(200, x -> endSlope(x, radiusRatio), low, high);
     }
 
     /** R′ at ρ = b/a for R(1) = 1, R′(1) = 0, with distances in units of a and wavenumber x = k_c·a. */
