@@ -11,10 +11,12 @@ package org.linesweep.physics;
  * distance to the function's nearest complex singularity. The internal impedances of a tube have poles at
  * Im u = ±π/4 (there (1 + j)·x is imaginary and the modified Bessel functions turn into J and Y, whose cross
  * products vanish); on pieces one unit long that gives a Bernstein ellipse of ρ ≈ 3.4, so 25 points per piece
- * reach about 1e-13 (measured: within 4e-13 of a table from exact nodes, c/b from 1.005 to 100). Filling a
- * table's nodes from the samples then costs 26 exact evaluations per unit of ln x instead of 128. Each piece is checked against one more exact evaluation between its points; a piece that
- * misses {@link #VALUE_TOLERANCE} makes {@link #tableOf} fall back to exact nodes, so the table is never less
- * accurate than one built from exact nodes by more than the check allows.
+ * reach about 1e-13 (measured: within 4e-13 of a table from exact nodes, c/b from 1.005 to 100). Neighbouring
+ * pieces share their end point, so filling a table's nodes from the samples costs 25 exact evaluations per
+ * unit of ln x, the check included, instead of 128. Each piece is checked against one more exact evaluation
+ * between its points; a piece that misses {@link #VALUE_TOLERANCE} or {@link #SLOPE_TOLERANCE} makes
+ * {@link #tableOf} fall back to exact nodes, so the table is never less accurate than one built from exact
+ * nodes by more than the check allows.
  */
 final class ChebyshevSampler implements HermiteTable.Source {
 
@@ -27,6 +29,13 @@ final class ChebyshevSampler implements HermiteTable.Source {
     /** Largest |ΔG′|/(|G′| + |G|) allowed at a piece's check point, G′ = dG/du. */
     static final double SLOPE_TOLERANCE = 1e-10;
 
+    /**
+     * Filling one table node from the samples (a barycentric sum over {@link #POINTS_PER_PIECE} points and a
+     * logarithm) costs about this fraction of one exact internal-impedance evaluation (measured: 0.1-0.2 µs
+     * against 1-5 µs).
+     */
+    static final double NODE_FILL_COST = 0.1;
+
     private final double firstU;
     private final double pieceSpan;
     private final int pieces;
@@ -38,7 +47,7 @@ final class ChebyshevSampler implements HermiteTable.Source {
     private ChebyshevSampler(HermiteTable.Source exact, double xMin, double xMax) {
         firstU = Math.log(xMin);
         double span = Math.log(xMax / xMin);
-        pieces = Math.max(1, (int) Math.ceil(span / PIECE_LOG_SPAN));
+        pieces = pieceCount(span);
         pieceSpan = span / pieces;
         nodeU = new double[pieces][POINTS_PER_PIECE];
         samples = new double[pieces][4][POINTS_PER_PIECE];
@@ -49,7 +58,14 @@ final class ChebyshevSampler implements HermiteTable.Source {
             double centre = firstU + (p + 0.5) * pieceSpan;
             double half = 0.5 * pieceSpan;
             for (int j = 0; j <= last; j++) {
-                // x_j = cos(jπ/(n−1)), in decreasing order; neighbouring pieces share their end points
+                // x_j = cos(jπ/(n−1)), in decreasing order: a piece's last point is the first of the piece before
+                if (j == last && p > 0) {
+                    nodeU[p][j] = nodeU[p - 1][0];
+                    for (int c = 0; c < 4; c++) {
+                        samples[p][c][j] = samples[p - 1][c][0];
+                    }
+                    continue;
+                }
                 double u = centre + half * Math.cos(Math.PI * j / last);
                 nodeU[p][j] = u;
                 sample(exact, u, out);
@@ -72,21 +88,20 @@ final class ChebyshevSampler implements HermiteTable.Source {
     }
 
     /**
-     * Filling one table node from the samples (a barycentric sum over {@link #POINTS_PER_PIECE} points and a
-     * logarithm) costs about this fraction of one exact internal-impedance evaluation (measured: 0.1-0.2 µs
-     * against 1-5 µs).
-     */
-    static final double NODE_FILL_COST = 0.1;
-
-    /**
      * True when a sampled table over [xMin, xMax] costs less than evaluating the {@code points} sweep points that
      * fall in that range exactly, with the same margin as {@link HermiteTable#pays}.
      */
     static boolean pays(double xMin, double xMax, int nodesPerUnitLog, int points) {
         double span = Math.log(xMax / xMin);
-        int pieces = Math.max(1, (int) Math.ceil(span / PIECE_LOG_SPAN));
-        double exactEvaluations = pieces * (POINTS_PER_PIECE + 1.0) + (span * nodesPerUnitLog + 1) * NODE_FILL_COST;
+        // each piece: its points but the one shared with the piece before, and its check
+        double exactEvaluations = pieceCount(span) * POINTS_PER_PIECE + 1.0
+                + (span * nodesPerUnitLog + 1) * NODE_FILL_COST;
         return exactEvaluations * HermiteTable.POINTS_PER_NODE <= points;
+    }
+
+    /** Pieces of at most {@link #PIECE_LOG_SPAN} over a span of ln x. */
+    private static int pieceCount(double span) {
+        return Math.max(1, (int) Math.ceil(span / PIECE_LOG_SPAN));
     }
 
     /** Whether every piece met the tolerances (for the tests). */

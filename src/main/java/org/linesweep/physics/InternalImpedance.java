@@ -137,7 +137,7 @@ public final class InternalImpedance {
 
     /**
      * A table of the tube's full (thin-wall) Z/R_dc for one c/b over [xMin, xMax] of b/δ, its nodes read from
-     * exact evaluations (four complex Bessel functions each) at Chebyshev points, some 26 per unit of ln(b/δ)
+     * exact evaluations (four complex Bessel functions each) at Chebyshev points, some 25 per unit of ln(b/δ)
      * instead of 128 (see {@link ChebyshevSampler}): a drag of the outer conductor changes c/b at every step, so
      * this is built at every step. The caller decides whether a table pays.
      */
