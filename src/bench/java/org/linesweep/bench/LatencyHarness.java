@@ -158,10 +158,8 @@ public final class LatencyHarness extends Application {
                 }
                 slider.setValueChanging(true);
                 long t0 = System.nanoTime();
-                // sweep back and forth over a quarter of the slider's range
                 double before = model.getDesign().geometry().value("outerDiameter");
-                double position = 500 + 250 * Math.sin(step * 0.05 + 0.3);
-                slider.setValue(position);
+                slider.setValue(slidePosition(step));
                 stepStart = t0;
                 stepOuterDiameter = model.getDesign().geometry().value("outerDiameter");
                 if (stepOuterDiameter == before) {
@@ -188,12 +186,17 @@ public final class LatencyHarness extends Application {
         slider.setValueChanging(true);
         long t0 = System.nanoTime();
         double before = model.getDesign().geometry().value("outerDiameter");
-        slider.setValue(500 + 250 * Math.sin(step * 0.05 + 0.3));
+        slider.setValue(slidePosition(step));
         Design stepDesign = model.getDesign();
         if (stepDesign.geometry().value("outerDiameter") != before && step >= WARM_UP) {
             openSteps.add(new OpenStep(stepDesign, t0));
         }
         step++;
+    }
+
+    /** The slider's position at a step: back and forth over a quarter of its range. */
+    private static double slidePosition(int step) {
+        return 500 + 250 * Math.sin(step * 0.05 + 0.3);
     }
 
     /** A free-running step not yet on screen: its design and when it was set. */
@@ -287,19 +290,23 @@ public final class LatencyHarness extends Application {
         double heapMb = (ManagementFactory.getMemoryMXBean().getHeapMemoryUsage().getUsed()) / 1048576.0;
         System.out.printf(Locale.ROOT,
                 "LATENCY mode=%s points=%d plots=4 steps=%d fx_p50_ms=%.2f fx_p95_ms=%.2f layout_p50_ms=%.2f"
-                        + " layout_p95_ms=%.2f paint_p50_ms=%.2f total_p50_ms=%.2f total_p95_ms=%.2f heap_after_gc_mb=%.1f"
-                        + " max_heap_mb=%.0f final_on_screen=%s%n",
+                        + " layout_p95_ms=%.2f paint_p50_ms=%.2f total_p50_ms=%.2f total_p95_ms=%.2f"
+                        + " heap_after_gc_mb=%.1f max_heap_mb=%.0f final_on_screen=%s%n",
                 (baseline ? "baseline" : "explorer") + (free ? "-free" : ""), points,
                 free ? totalTimes.size() : fxTimes.size(), percentile(fxTimes, 50),
                 percentile(fxTimes, 95), percentile(layoutTimes, 50), percentile(layoutTimes, 95),
                 percentile(paintTimes, 50), percentile(totalTimes, 50), percentile(totalTimes, 95), heapMb,
                 Runtime.getRuntime().maxMemory() / 1048576.0, finalShown);
-        if (System.getProperty("harness.totals") != null) {
-            System.out.println("TOTALS " + totalTimes.stream().map(t -> String.format(Locale.ROOT, "%.1f", t)).toList());
-            System.out.println("FX " + fxTimes.stream().map(t -> String.format(Locale.ROOT, "%.1f", t)).toList());
+        if (Boolean.getBoolean("harness.totals")) {
+            System.out.println("TOTALS " + inTenths(totalTimes));
+            System.out.println("FX " + inTenths(fxTimes));
         }
         worker.shutdownNow();
         Platform.exit();
+    }
+
+    private static List<String> inTenths(List<Double> millis) {
+        return millis.stream().map(t -> String.format(Locale.ROOT, "%.1f", t)).toList();
     }
 
     private static double percentile(List<Double> values, double p) {
