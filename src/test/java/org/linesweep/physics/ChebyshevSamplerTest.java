@@ -65,7 +65,9 @@ class ChebyshevSamplerTest {
 
     /**
      * The tube's thin-wall Z/R_dc for wall ratios from very thin to very thick: a sampled table agrees with a table
-     * from exact nodes to 1e-12 of |Z/R_dc| between the nodes, far inside the 5e-10 both keep from the exact form.
+     * from exact nodes to 1e-12 of |Z/R_dc| between the nodes, far inside the 5e-10 both keep from the exact form
+     * (Schelkunoff 1934's tube formula in modified Bessel functions, checked against its DC, skin-effect and
+     * thin-sheet limits in {@code ConductorModelTest}). The tolerances are this method's own (a numerical check, not a physical value).
      */
     @Test
     void sampledTubeTablesMatchTablesFromExactNodes() {
