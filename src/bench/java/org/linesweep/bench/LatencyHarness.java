@@ -94,7 +94,6 @@ public final class LatencyHarness extends Application {
     /** -Dharness.free=true: a new value at every pulse without waiting for the last to be drawn. */
     private final boolean free = Boolean.getBoolean("harness.free");
     private final List<OpenStep> openSteps = new ArrayList<>();
-    private int freeIdle;
 
     public static void main(String[] args) {
         ExplorerLauncher.configureRendering(); // the explorer's own rendering settings, for both modes
@@ -141,11 +140,7 @@ public final class LatencyHarness extends Application {
 
             @Override
             public void handle(long now) {
-                if (free) {
-                    freeStep(slider, points, this);
-                    return;
-                }
-                if (waiting) {
+                if (waiting && !free) {
                     return;
                 }
                 if (step == 0 && idle++ < 30) {
@@ -160,6 +155,10 @@ public final class LatencyHarness extends Application {
                 long t0 = System.nanoTime();
                 double before = model.getDesign().geometry().value("outerDiameter");
                 slider.setValue(slidePosition(step));
+                if (free) {
+                    openStep(before, t0);
+                    return;
+                }
                 stepStart = t0;
                 stepOuterDiameter = model.getDesign().geometry().value("outerDiameter");
                 if (stepOuterDiameter == before) {
@@ -173,23 +172,14 @@ public final class LatencyHarness extends Application {
         }.start();
     }
 
-    /** Free-running drag: a new value at every pulse, whether or not the last one has been drawn yet. */
-    private void freeStep(Slider slider, int points, AnimationTimer timer) {
-        if (step == 0 && freeIdle++ < 30) {
-            return;
-        }
-        if (step >= WARM_UP + MEASURED) {
-            timer.stop();
-            finish(points, slider);
-            return;
-        }
-        slider.setValueChanging(true);
-        long t0 = System.nanoTime();
-        double before = model.getDesign().geometry().value("outerDiameter");
-        slider.setValue(slidePosition(step));
+    /**
+     * Free-running drag: the value just set (at {@code start}) waits to be shown, while the next one is set at the
+     * next pulse anyway.
+     */
+    private void openStep(double outerDiameterBefore, long start) {
         Design stepDesign = model.getDesign();
-        if (stepDesign.geometry().value("outerDiameter") != before && step >= WARM_UP) {
-            openSteps.add(new OpenStep(stepDesign, t0));
+        if (stepDesign.geometry().value("outerDiameter") != outerDiameterBefore && step >= WARM_UP) {
+            openSteps.add(new OpenStep(stepDesign, start));
         }
         step++;
     }
