@@ -68,7 +68,7 @@ import org.linesweep.sweep.SweepResult;
  */
 public final class LatencyHarness extends Application {
 
-    private static final int WARM_UP = 60;
+    private static final int WARM_UP = Integer.getInteger("harness.warmup", 60);
     private static final int MEASURED = 300;
 
     private final List<Double> fxTimes = new ArrayList<>();
