@@ -2,6 +2,7 @@ package org.linesweep.bench;
 
 import com.sun.javafx.tk.RenderJob;
 import com.sun.javafx.tk.Toolkit;
+import java.lang.management.CompilationMXBean;
 import java.lang.management.ManagementFactory;
 import java.util.ArrayList;
 import java.util.Arrays;
@@ -56,18 +57,21 @@ import org.linesweep.sweep.SweepResult;
  * <p>System properties: {@code harness.free=true} sets a new value at every pulse without waiting for the last
  * one to be drawn (a step counts as shown with the first frame that shows it or a newer value; no FX time is
  * taken); {@code harness.inline=false} makes the model send every step to the worker thread; {@code
- * harness.totals=true} prints every step's figures.
+ * harness.totals=true} prints every step's figures; {@code harness.warmup=N} sets the warm-up steps (60 by
+ * default, as specified); {@code harness.debug} prints each step's bookkeeping and the scene's node counts.
  *
  * <p>Mode {@code baseline} draws the same four quantities with the stock {@code LineChart} on a log
  * {@code ValueAxis}, animation and symbols off, fed the same snapshots.
  *
  * <p>Arguments: mode (explorer|baseline), points. Prints
  * {@code LATENCY mode=… points=… fx_p50_ms=… layout_p50_ms=… paint_p50_ms=… total_p50_ms=… total_p95_ms=…
- * heap_mb=… final_on_screen=…}; paint is from the end of the pulse that drew a step to the end of its frame's
- * paint (the render thread's work for the frame, plus any wait for the frame before it).
+ * heap_mb=… final_on_screen=… jit_ms=…}; paint is from the end of the pulse that drew a step to the end of its
+ * frame's paint (the render thread's work for the frame, plus any wait for the frame before it); jit_ms is the
+ * time the JIT compilers spent during the measured steps, summed over their threads.
  */
 public final class LatencyHarness extends Application {
 
+    /** Steps before the measured ones: 60 as specified; {@code -Dharness.warmup=N} to study a warmer JVM. */
     private static final int WARM_UP = Integer.getInteger("harness.warmup", 60);
     private static final int MEASURED = 300;
 
@@ -94,6 +98,8 @@ public final class LatencyHarness extends Application {
     /** -Dharness.free=true: a new value at every pulse without waiting for the last to be drawn. */
     private final boolean free = Boolean.getBoolean("harness.free");
     private final List<OpenStep> openSteps = new ArrayList<>();
+    /** The JIT compilers' accumulated time when the measured steps began, ms (-1 before). */
+    private long compilingAtStart = -1;
 
     public static void main(String[] args) {
         ExplorerLauncher.configureRendering(); // the explorer's own rendering settings, for both modes
@@ -150,6 +156,9 @@ public final class LatencyHarness extends Application {
                     stop();
                     finish(points, slider);
                     return;
+                }
+                if (step == WARM_UP && compilingAtStart < 0) {
+                    compilingAtStart = compilationMillis();
                 }
                 slider.setValueChanging(true);
                 long t0 = System.nanoTime();
@@ -281,18 +290,46 @@ public final class LatencyHarness extends Application {
         System.out.printf(Locale.ROOT,
                 "LATENCY mode=%s points=%d plots=4 steps=%d fx_p50_ms=%.2f fx_p95_ms=%.2f layout_p50_ms=%.2f"
                         + " layout_p95_ms=%.2f paint_p50_ms=%.2f total_p50_ms=%.2f total_p95_ms=%.2f"
-                        + " heap_after_gc_mb=%.1f max_heap_mb=%.0f final_on_screen=%s%n",
+                        + " heap_after_gc_mb=%.1f max_heap_mb=%.0f final_on_screen=%s jit_ms=%d%n",
                 (baseline ? "baseline" : "explorer") + (free ? "-free" : ""), points,
                 free ? totalTimes.size() : fxTimes.size(), percentile(fxTimes, 50),
                 percentile(fxTimes, 95), percentile(layoutTimes, 50), percentile(layoutTimes, 95),
                 percentile(paintTimes, 50), percentile(totalTimes, 50), percentile(totalTimes, 95), heapMb,
-                Runtime.getRuntime().maxMemory() / 1048576.0, finalShown);
+                Runtime.getRuntime().maxMemory() / 1048576.0, finalShown, compilationMillis() - compilingAtStart);
         if (Boolean.getBoolean("harness.totals")) {
             System.out.println("TOTALS " + inTenths(totalTimes));
             System.out.println("FX " + inTenths(fxTimes));
         }
+        if (System.getProperty("harness.debug") != null) {
+            countNodes(slider.getScene().getRoot(), 0);
+        }
         worker.shutdownNow();
         Platform.exit();
+    }
+
+    /**
+     * Time the JIT compilers have spent so far, summed over their threads, ms (0 where the JVM does not say). On two
+     * cores their work during the measured steps competes with the FX and render threads.
+     */
+    private static long compilationMillis() {
+        CompilationMXBean compiler = ManagementFactory.getCompilationMXBean();
+        return compiler != null && compiler.isCompilationTimeMonitoringSupported()
+                ? compiler.getTotalCompilationTime() : 0;
+    }
+
+    /** With -Dharness.debug: prints the scene's containers of more than 40 nodes (every pulse visits them all). */
+    private static int countNodes(javafx.scene.Node node, int depth) {
+        int n = 1;
+        if (node instanceof Parent parent) {
+            for (javafx.scene.Node child : parent.getChildrenUnmodifiable()) {
+                n += countNodes(child, depth + 1);
+            }
+        }
+        if (depth <= 6 && n > 40) {
+            System.out.println("NODES " + "  ".repeat(depth) + node.getClass().getSimpleName() + " "
+                    + node.getStyleClass() + " visible=" + node.isVisible() + " " + n);
+        }
+        return n;
     }
 
     private static List<String> inTenths(List<Double> millis) {
