@@ -3,11 +3,15 @@ package org.linesweep.app.view;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.function.DoubleConsumer;
+import javafx.geometry.Insets;
 import javafx.geometry.VPos;
 import javafx.scene.SnapshotParameters;
 import javafx.scene.canvas.Canvas;
 import javafx.scene.canvas.GraphicsContext;
 import javafx.scene.image.WritableImage;
+import javafx.scene.layout.Background;
+import javafx.scene.layout.BackgroundFill;
+import javafx.scene.layout.CornerRadii;
 import javafx.scene.layout.Region;
 import javafx.scene.paint.Color;
 import javafx.scene.shape.Line;
@@ -84,6 +88,14 @@ public final class FrequencyPlot extends Region {
         crosshair.setMouseTransparent(true);
         setMinSize(200, 120);
         setPrefSize(480, 260);
+        // The axes' canvas covers the plot and paints every pixel of it (paper first), so the plot can declare
+        // itself opaque: a repaint of the curves then starts here, instead of at the frame behind, whose
+        // background the software renderer would otherwise fill under every step of a drag, unseen. JavaFX
+        // reads declared opaque insets only from a region with a background, hence one fill of no height,
+        // which is never painted.
+        setBackground(new Background(new BackgroundFill(Color.TRANSPARENT, CornerRadii.EMPTY,
+                new Insets(0, 0, Double.MAX_VALUE, 0))));
+        declareOpaque();
         setOnMouseMoved(e -> {
             double f = frequencyAt(e.getX());
             onHover.accept(f >= minHz && f <= maxHz ? f : Double.NaN);
@@ -222,7 +234,13 @@ public final class FrequencyPlot extends Region {
         this.ink = ink;
         this.grid = grid;
         this.paper = paper;
+        declareOpaque();
         markBackground();
+    }
+
+    /** Opaque over its whole area when the paper is (see the constructor). */
+    private void declareOpaque() {
+        setOpaqueInsets(paper.isOpaque() ? Insets.EMPTY : null);
     }
 
     /** Turns per-column decimation off, to compare against the full drawing in tests. */

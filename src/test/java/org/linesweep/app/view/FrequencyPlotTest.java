@@ -271,4 +271,40 @@ class FrequencyPlotTest {
         robot.interact(() -> image[0] = plot.snapshot(2));
         assertEquals(2 * plot.getWidth(), image[0].getWidth(), 1);
     }
+
+    /**
+     * The plot declares its whole area opaque, so the renderer starts a repaint there and paints nothing behind
+     * it: the claim must be true (shown on a magenta pane, no pixel of the plot may let it through), its own
+     * background must never paint, and a translucent paper withdraws the claim.
+     */
+    @Test
+    void declaresOpaqueOnlyWhatItCovers(FxRobot robot) {
+        robot.interact(() -> {
+            ((StackPane) plot.getParent()).setBackground(new javafx.scene.layout.Background(
+                    new javafx.scene.layout.BackgroundFill(Color.MAGENTA, null, null)));
+            plot.setSeries(List.of(curve(500, 1.0, 3, Color.BLUE)));
+        });
+        WaitForAsyncUtils.waitForFxEvents();
+        assertEquals(javafx.geometry.Insets.EMPTY, plot.getOpaqueInsets());
+        javafx.scene.layout.BackgroundFill fill = plot.getBackground().getFills().get(0);
+        assertTrue(fill.getInsets().getTop() + fill.getInsets().getBottom() >= plot.getHeight(),
+                "the plot's own fill has no height, so it is never painted");
+        WritableImage[] scene = new WritableImage[1];
+        robot.interact(() -> scene[0] = plot.getScene().snapshot(null));
+        PixelReader reader = scene[0].getPixelReader();
+        javafx.geometry.Point2D origin = plot.localToScene(0, 0);
+        int seeThrough = 0;
+        for (int x = 0; x < (int) plot.getWidth(); x++) {
+            for (int y = 0; y < (int) plot.getHeight(); y++) {
+                if (reader.getColor((int) origin.getX() + x, (int) origin.getY() + y).equals(Color.MAGENTA)) {
+                    seeThrough++;
+                }
+            }
+        }
+        assertEquals(0, seeThrough, "pixels of the plot showing the pane behind it");
+        robot.interact(() -> plot.setLook(1, 12, Color.BLACK, Color.LIGHTGRAY, Color.color(1, 1, 1, 0.5)));
+        assertEquals(null, plot.getOpaqueInsets());
+        robot.interact(() -> plot.setMeetingLook(false));
+        assertEquals(javafx.geometry.Insets.EMPTY, plot.getOpaqueInsets());
+    }
 }
