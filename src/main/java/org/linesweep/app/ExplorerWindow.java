@@ -141,6 +141,7 @@ public final class ExplorerWindow {
         model.designProperty().addListener((o, old, now) -> crossSection.show(now.geometry()));
         crossSection.show(model.getDesign().geometry());
         model.snapshotProperty().addListener((o, old, now) -> showWarnings(now));
+        model.draggingProperty().addListener((o, was, now) -> showWarnings(model.snapshotProperty().get()));
         model.meetingModeProperty().addListener((o, old, now) -> applyMeetingMode(now));
         refreshRecent();
     }
@@ -196,7 +197,10 @@ public final class ExplorerWindow {
         List<String> list = snapshot == null ? List.of() : snapshot.warnings();
         warnings.setText(list.isEmpty() ? "" : "Outside a model's stated range: " + String.join(" · ", list));
         warnings.setVisible(!list.isEmpty());
-        warnings.setManaged(!list.isEmpty());
+        // during a drag the strip keeps its place once shown, so the plots below it do not jump up and down
+        // (and the whole window is not repainted) each time the design crosses a model's limit; it goes when
+        // the drag ends
+        warnings.setManaged(!list.isEmpty() || (model.draggingProperty().get() && warnings.isManaged()));
     }
 
     private void applyMeetingMode(boolean meeting) {

@@ -59,6 +59,32 @@ class ExplorerWindowTest extends WindowTestBase {
         assertEquals(2.95e-3, model.getDesign().geometry().value("outerDiameter"), 1e-15, "the drag is one undo step");
     }
 
+    /**
+     * A drag that takes the line past its TEM limit and back: the warning shows while it applies, and its strip
+     * keeps its place until the drag ends, so the plots below do not jump as the warning comes and goes.
+     */
+    @Test
+    void theWarningStripHoldsItsPlaceDuringADrag(FxRobot robot) throws TimeoutException {
+        settle();
+        javafx.scene.control.Label strip = window.warningStrip();
+        assertFalse(strip.isManaged(), "no warning on the preset: TE11 above its 20 GHz sweep");
+        robot.interact(model::beginDrag);
+        // outer diameter 8 mm: TE11 near 12 GHz, inside the sweep
+        robot.interact(() -> model.drag(d -> d.withGeometryValue("outerDiameter", 8e-3)));
+        settle();
+        assertTrue(strip.isVisible() && strip.isManaged());
+        assertTrue(strip.getText().contains("higher-order mode"), strip.getText());
+        double plotsTop = window.plots().impedancePlot().localToScene(0, 0).getY();
+        robot.interact(() -> model.drag(d -> d.withGeometryValue("outerDiameter", 2.95e-3)));
+        settle();
+        assertFalse(strip.isVisible(), "the warning no longer applies");
+        assertTrue(strip.isManaged(), "its place is kept while the drag goes on");
+        assertEquals(plotsTop, window.plots().impedancePlot().localToScene(0, 0).getY(), 1e-9, "the plots stayed");
+        robot.interact(model::endDrag);
+        WaitForAsyncUtils.waitForFxEvents();
+        assertFalse(strip.isManaged(), "the strip goes when the drag ends");
+    }
+
     /** The read-out refreshes at most ten times a second during a drag, and always ends on the final design. */
     @Test
     void aFastDragEndsWithTheFinalDesignInTheReadout(FxRobot robot) throws TimeoutException, InterruptedException {

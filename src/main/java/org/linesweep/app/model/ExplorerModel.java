@@ -6,6 +6,7 @@ import javafx.beans.property.BooleanProperty;
 import javafx.beans.property.DoubleProperty;
 import javafx.beans.property.ObjectProperty;
 import javafx.beans.property.ReadOnlyBooleanProperty;
+import javafx.beans.property.ReadOnlyBooleanWrapper;
 import javafx.beans.property.ReadOnlyObjectProperty;
 import javafx.beans.property.ReadOnlyObjectWrapper;
 import javafx.beans.property.ReadOnlyStringProperty;
@@ -42,6 +43,7 @@ public final class ExplorerModel {
     private final DoubleProperty crosshairHz = new SimpleDoubleProperty(this, "crosshairHz", Double.NaN);
     private final SweepService service;
     private Design dragStart;
+    private final ReadOnlyBooleanWrapper dragging = new ReadOnlyBooleanWrapper(this, "dragging", false);
     private int pinCounter;
 
     /**
@@ -138,6 +140,12 @@ public final class ExplorerModel {
     /** Marks the start of a continuous edit (a slider drag): the whole drag becomes one undo step. */
     public void beginDrag() {
         dragStart = design.get();
+        dragging.set(true);
+    }
+
+    /** True from {@link #beginDrag} to {@link #endDrag}: views may hold their layout still meanwhile. */
+    public ReadOnlyBooleanProperty draggingProperty() {
+        return dragging.getReadOnlyProperty();
     }
 
     /** Applies one step of a continuous edit, without an undo entry of its own. */
@@ -151,6 +159,7 @@ public final class ExplorerModel {
             history.record(dragStart);
         }
         dragStart = null;
+        dragging.set(false);
     }
 
     private boolean change(DesignChange change, boolean record) {
