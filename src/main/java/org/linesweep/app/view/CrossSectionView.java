@@ -3,9 +3,6 @@ package org.linesweep.app.view;
 import javafx.geometry.Insets;
 import javafx.scene.canvas.Canvas;
 import javafx.scene.canvas.GraphicsContext;
-import javafx.scene.layout.Background;
-import javafx.scene.layout.BackgroundFill;
-import javafx.scene.layout.CornerRadii;
 import javafx.scene.layout.Region;
 import javafx.scene.paint.Color;
 import org.linesweep.design.Geometry;
@@ -24,23 +21,16 @@ public final class CrossSectionView extends Region {
         setPrefSize(260, 150);
         setMinSize(260, 150);
         getStyleClass().add("cross-section");
-        // the drawing fills its canvas (white first), so the view declares that area opaque: a redraw during a
-        // drag is then painted from here, not from the panel behind, whose backgrounds would be filled under
-        // it unseen (see FrequencyPlot; a fill of no height, as JavaFX reads opaque insets only with one)
-        setBackground(new Background(new BackgroundFill(Color.TRANSPARENT, CornerRadii.EMPTY,
-                new Insets(0, 0, Double.MAX_VALUE, 0))));
     }
 
     @Override
     protected void layoutChildren() {
-        // on whole pixels, so that the opaque area covers the canvas's repainted pixels exactly
+        // the drawing fills its canvas (white first), so that area is declared opaque; the canvas sits on whole
+        // pixels so that the area covers its repainted pixels exactly
         double left = Math.max(0, Math.floor((getWidth() - canvas.getWidth()) / 2));
         canvas.relocate(left, 0);
-        Insets opaque = new Insets(0, Math.max(0, getWidth() - left - canvas.getWidth()),
-                Math.max(0, getHeight() - canvas.getHeight()), left);
-        if (!opaque.equals(getOpaqueInsets())) {
-            setOpaqueInsets(opaque);
-        }
+        OpaqueArea.declare(this, new Insets(0, Math.max(0, getWidth() - left - canvas.getWidth()),
+                Math.max(0, getHeight() - canvas.getHeight()), left));
     }
 
     public void show(Geometry newGeometry) {

@@ -9,9 +9,6 @@ import javafx.scene.SnapshotParameters;
 import javafx.scene.canvas.Canvas;
 import javafx.scene.canvas.GraphicsContext;
 import javafx.scene.image.WritableImage;
-import javafx.scene.layout.Background;
-import javafx.scene.layout.BackgroundFill;
-import javafx.scene.layout.CornerRadii;
 import javafx.scene.layout.Region;
 import javafx.scene.paint.Color;
 import javafx.scene.shape.Line;
@@ -88,13 +85,6 @@ public final class FrequencyPlot extends Region {
         crosshair.setMouseTransparent(true);
         setMinSize(200, 120);
         setPrefSize(480, 260);
-        // The axes' canvas covers the plot and paints every pixel of it (paper first), so the plot can declare
-        // itself opaque: a repaint of the curves then starts here, instead of at the frame behind, whose
-        // background the software renderer would otherwise fill under every step of a drag, unseen. JavaFX
-        // reads declared opaque insets only from a region with a background, hence one fill of no height,
-        // which is never painted.
-        setBackground(new Background(new BackgroundFill(Color.TRANSPARENT, CornerRadii.EMPTY,
-                new Insets(0, 0, Double.MAX_VALUE, 0))));
         declareOpaque();
         setOnMouseMoved(e -> {
             double f = frequencyAt(e.getX());
@@ -238,9 +228,12 @@ public final class FrequencyPlot extends Region {
         markBackground();
     }
 
-    /** Opaque over its whole area when the paper is (see the constructor). */
+    /**
+     * The axes' canvas covers the plot and paints every pixel of it, paper first: so the plot is opaque over its
+     * whole area when the paper is, and a repaint of the curves starts here rather than at the frame behind.
+     */
     private void declareOpaque() {
-        setOpaqueInsets(paper.isOpaque() ? Insets.EMPTY : null);
+        OpaqueArea.declare(this, paper.isOpaque() ? Insets.EMPTY : null);
     }
 
     /** Turns per-column decimation off, to compare against the full drawing in tests. */

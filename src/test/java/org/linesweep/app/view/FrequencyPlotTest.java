@@ -4,9 +4,13 @@ import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.util.List;
+import javafx.geometry.Insets;
+import javafx.geometry.Point2D;
 import javafx.scene.Scene;
 import javafx.scene.image.PixelReader;
 import javafx.scene.image.WritableImage;
+import javafx.scene.layout.Background;
+import javafx.scene.layout.BackgroundFill;
 import javafx.scene.layout.StackPane;
 import javafx.scene.paint.Color;
 import javafx.stage.Stage;
@@ -280,19 +284,18 @@ class FrequencyPlotTest {
     @Test
     void declaresOpaqueOnlyWhatItCovers(FxRobot robot) {
         robot.interact(() -> {
-            ((StackPane) plot.getParent()).setBackground(new javafx.scene.layout.Background(
-                    new javafx.scene.layout.BackgroundFill(Color.MAGENTA, null, null)));
+            ((StackPane) plot.getParent()).setBackground(new Background(new BackgroundFill(Color.MAGENTA, null, null)));
             plot.setSeries(List.of(curve(500, 1.0, 3, Color.BLUE)));
         });
         WaitForAsyncUtils.waitForFxEvents();
-        assertEquals(javafx.geometry.Insets.EMPTY, plot.getOpaqueInsets());
-        javafx.scene.layout.BackgroundFill fill = plot.getBackground().getFills().get(0);
+        assertEquals(Insets.EMPTY, plot.getOpaqueInsets());
+        BackgroundFill fill = plot.getBackground().getFills().get(0);
         assertTrue(fill.getInsets().getTop() + fill.getInsets().getBottom() >= plot.getHeight(),
                 "the plot's own fill has no height, so it is never painted");
         WritableImage[] scene = new WritableImage[1];
         robot.interact(() -> scene[0] = plot.getScene().snapshot(null));
         PixelReader reader = scene[0].getPixelReader();
-        javafx.geometry.Point2D origin = plot.localToScene(0, 0);
+        Point2D origin = plot.localToScene(0, 0);
         int seeThrough = 0;
         for (int x = 0; x < (int) plot.getWidth(); x++) {
             for (int y = 0; y < (int) plot.getHeight(); y++) {
@@ -305,6 +308,6 @@ class FrequencyPlotTest {
         robot.interact(() -> plot.setLook(1, 12, Color.BLACK, Color.LIGHTGRAY, Color.color(1, 1, 1, 0.5)));
         assertEquals(null, plot.getOpaqueInsets());
         robot.interact(() -> plot.setMeetingLook(false));
-        assertEquals(javafx.geometry.Insets.EMPTY, plot.getOpaqueInsets());
+        assertEquals(Insets.EMPTY, plot.getOpaqueInsets());
     }
 }
