@@ -55,7 +55,10 @@ class CoaxModesTest {
         assertEquals(shot, CoaxModes.te11CutoffTimesInnerRadius(radiusRatio), 1e-10 * shot);
     }
 
-    /** Past the series' ends: the thin gap's estimate and the circular guide's j′11 = 1.84118 (A&amp;S Table 9.5, from memory). */
+    /**
+     * Past the series' ends: the thin gap's estimate and the circular guide's j′11 = 1.84118 (A&amp;S Table 9.5,
+     * from memory; mpmath agrees).
+     */
     @Test
     void extremeRatiosUseTheirLimits() {
         double thin = 1 + 1e-6;
